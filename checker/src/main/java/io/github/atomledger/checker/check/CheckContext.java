@@ -1,0 +1,56 @@
+package io.github.atomledger.checker.check;
+
+import io.github.atomledger.checker.check.balance.ReactionBalance;
+import io.github.atomledger.checker.check.balance.SpeciesChemistry;
+import io.github.atomledger.checker.model.ModelView;
+
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * Everything a check may read about one model: the model view and the results computed once
+ * for all checks (parsed formulas and charges, reaction balances). Immutable.
+ */
+public final class CheckContext {
+
+    private final ModelView model;
+    private final Map<String, SpeciesChemistry> chemistry;
+    private final Map<String, ReactionBalance> balances;
+
+    public CheckContext(ModelView model, Map<String, SpeciesChemistry> chemistry,
+                        Map<String, ReactionBalance> balances) {
+        this.model = Objects.requireNonNull(model, "model");
+        this.chemistry = Map.copyOf(chemistry);
+        this.balances = Map.copyOf(balances);
+    }
+
+    public ModelView model() {
+        return model;
+    }
+
+    /** Parsed chemistry of a species; empty when the id is not a species of the model. */
+    public Optional<SpeciesChemistry> chemistry(String speciesId) {
+        return Optional.ofNullable(chemistry.get(speciesId));
+    }
+
+    /** Parsed chemistry of every species, by id; unmodifiable. */
+    public Map<String, SpeciesChemistry> chemistryById() {
+        return chemistry;
+    }
+
+    /** The balance of a reaction; present for every reaction of the model. */
+    public ReactionBalance balance(String reactionId) {
+        ReactionBalance b = balances.get(reactionId);
+        if (b == null) {
+            throw new IllegalArgumentException("no reaction '" + reactionId + "' in " + model.file());
+        }
+        return b;
+    }
+
+    /** A finding about this model with the check's rule id and default severity. */
+    public Finding finding(ModelCheck check, String elementId, int line, String message, Map<String, String> data) {
+        return new Finding(check.ruleId(), check.defaultSeverity(), model.file(), elementId, line, message,
+                new java.util.TreeMap<>(data));
+    }
+}

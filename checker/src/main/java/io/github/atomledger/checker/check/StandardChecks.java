@@ -1,0 +1,43 @@
+package io.github.atomledger.checker.check;
+
+import io.github.atomledger.checker.check.balance.ChargeBalanceCheck;
+import io.github.atomledger.checker.check.balance.ChargeSyntaxCheck;
+import io.github.atomledger.checker.check.balance.ClassMismatchCheck;
+import io.github.atomledger.checker.check.balance.ElementBalanceCheck;
+import io.github.atomledger.checker.check.balance.ExemptReactionCheck;
+import io.github.atomledger.checker.check.balance.FormulaSyntaxCheck;
+import io.github.atomledger.checker.check.balance.MissingChemistryCheck;
+import io.github.atomledger.checker.check.balance.NotComputableCheck;
+import io.github.atomledger.checker.check.balance.PolymerFormulaCheck;
+import io.github.atomledger.checker.check.balance.SymbolCheck;
+import io.github.atomledger.checker.check.integrity.DuplicateIdCheck;
+import io.github.atomledger.checker.check.integrity.ReactionShapeCheck;
+import io.github.atomledger.checker.check.integrity.ReferenceCheck;
+
+import java.util.List;
+
+/** The registry: every check AtomLedger runs, listed explicitly. No classpath scanning. */
+public final class StandardChecks {
+
+    private StandardChecks() {
+    }
+
+    /** All checks in a fixed order; rule ids are unique. */
+    public static List<ModelCheck> all() {
+        return List.of(
+                new DuplicateIdCheck(),
+                new ReferenceCheck(),
+                new ReactionShapeCheck(),
+                new FormulaSyntaxCheck(),
+                new ChargeSyntaxCheck(),
+                new SymbolCheck(),
+                MissingChemistryCheck.formula(),
+                MissingChemistryCheck.charge(),
+                new ElementBalanceCheck(),
+                new ChargeBalanceCheck(),
+                new NotComputableCheck(),
+                new PolymerFormulaCheck(),
+                new ExemptReactionCheck(),
+                new ClassMismatchCheck());
+    }
+}

@@ -1,0 +1,104 @@
+package io.github.atomledger.checker.engine;
+
+import io.github.atomledger.checker.AtomLedgerException;
+import io.github.atomledger.checker.check.CheckContext;
+import io.github.atomledger.checker.check.Finding;
+import io.github.atomledger.checker.check.ModelCheck;
+import io.github.atomledger.checker.check.StandardChecks;
+import io.github.atomledger.checker.check.balance.BalanceCalculator;
+import io.github.atomledger.checker.check.balance.ReactionBalance;
+import io.github.atomledger.checker.check.balance.ReactionClass;
+import io.github.atomledger.checker.check.balance.SpeciesChemistry;
+import io.github.atomledger.checker.model.LoadOptions;
+import io.github.atomledger.checker.model.ModelLoader;
+import io.github.atomledger.checker.model.ModelView;
+import io.github.atomledger.checker.model.ReactionInfo;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Runs every check on every model of a {@link RunConfig}. Read-only: it never writes a model.
+ *
+ * <p>Usage:
+ * <pre>{@code
+ * RunResult result = new Engine().run(RunConfig.defaults(dir, List.of("models/**.xml")), RunListener.SILENT);
+ * result.failing().forEach(System.out::println);
+ * }</pre>
+ *
+ * <p>Problems in a model are findings. A broken input (missing file, malformed XML, not SBML)
+ * throws {@link AtomLedgerException}; a check that throws is wrapped with its rule id and the
+ * model file and stops the run. Thread-safe; deterministic (same input, same result).
+ */
+public final class Engine {
+
+    private final List<ModelCheck> checks;
+
+    public Engine() {
+        this(StandardChecks.all());
+    }
+
+    public Engine(List<ModelCheck> checks) {
+        this.checks = List.copyOf(checks);
+    }
+
+    public List<ModelCheck> checks() {
+        return checks;
+    }
+
+    public RunResult run(RunConfig config, RunListener listener) {
+        List<Path> files = ModelLocator.locate(config.baseDirectory(), config.models());
+        ModelLoader loader = new ModelLoader(new LoadOptions(config.maxModelBytes()));
+        List<ModelResult> results = new ArrayList<>();
+        for (Path file : files) {
+            String display = ModelLocator.relative(config.baseDirectory(), file);
+            listener.debug("reading " + display);
+            ModelView model = loader.load(file, display);
+            results.add(check(model, config.policy()));
+        }
+        return new RunResult(config, results);
+    }
+
+    /** Checks one loaded model. */
+    public ModelResult check(ModelView model, SeverityPolicy policy) {
+        BalanceCalculator calculator = new BalanceCalculator();
+        Map<String, SpeciesChemistry> chemistry = calculator.chemistry(model);
+        Map<String, ReactionBalance> balances = calculator.balances(model, chemistry);
+        CheckContext context = new CheckContext(model, chemistry, balances);
+
+        Map<String, List<Finding>> byReaction = new HashMap<>();
+        List<Finding> modelFindings = new ArrayList<>();
+        for (ModelCheck check : checks) {
+            List<Finding> found;
+            try {
+                found = check.check(context);
+            } catch (RuntimeException e) {
+                throw new AtomLedgerException(model.file() + ": check " + check.ruleId() + " failed: " + e, e);
+            }
+            for (Finding f : found) {
+                ReactionBalance b = balances.get(f.elementId());
+                boolean reactionFinding = b != null;
+                ReactionClass cls = reactionFinding ? b.reactionClass() : null;
+                policy.apply(f, cls).ifPresent(applied -> {
+                    if (reactionFinding) {
+                        byReaction.computeIfAbsent(applied.elementId(), k -> new ArrayList<>()).add(applied);
+                    } else {
+                        modelFindings.add(applied);
+                    }
+                });
+            }
+        }
+        List<ReactionResult> reactions = new ArrayList<>();
+        java.util.Set<String> done = new java.util.HashSet<>();
+        for (ReactionInfo r : model.reactions()) {
+            if (!done.add(r.id())) {
+                continue;
+            }
+            reactions.add(new ReactionResult(r, balances.get(r.id()), byReaction.getOrDefault(r.id(), List.of())));
+        }
+        return new ModelResult(model, reactions, modelFindings);
+    }
+}

@@ -1,0 +1,93 @@
+package io.github.atomledger.checker.report;
+
+import io.github.atomledger.checker.check.Finding;
+import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.check.balance.Deltas;
+import io.github.atomledger.checker.check.balance.ReactionBalance;
+import io.github.atomledger.checker.engine.ModelResult;
+import io.github.atomledger.checker.engine.ReactionResult;
+import io.github.atomledger.checker.engine.RunResult;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * The console text of a run: one summary line per model, then one line per reaction with a
+ * finding at or above the fail threshold, showing its imbalance ({@code R_PFK  C -20  charge ?}).
+ * Plain text; the front end decides about colour.
+ */
+public final class ConsoleSummary {
+
+    /** At most this many reaction lines per model; the rest are counted. */
+    public static final int MAX_REACTION_LINES = 50;
+
+    private ConsoleSummary() {
+    }
+
+    public static List<String> lines(RunResult result) {
+        List<String> out = new ArrayList<>();
+        Severity threshold = result.config().failOn() == null ? Severity.ERROR : result.config().failOn();
+        for (ModelResult m : result.models()) {
+            out.add(modelLine(m));
+            int shown = 0;
+            int hidden = 0;
+            for (ReactionResult r : m.reactions()) {
+                List<Finding> bad = r.findings().stream().filter(f -> f.severity().atLeast(threshold)).toList();
+                if (bad.isEmpty()) {
+                    continue;
+                }
+                if (shown++ >= MAX_REACTION_LINES) {
+                    hidden++;
+                    continue;
+                }
+                out.add("  " + reactionLine(r, bad));
+            }
+            if (hidden > 0) {
+                out.add("  ... and " + hidden + " more reaction(s); see the report");
+            }
+            for (Finding f : m.modelFindings()) {
+                if (f.severity().atLeast(threshold)) {
+                    out.add("  " + f.elementId() + "  [" + f.ruleId() + "] " + f.message());
+                }
+            }
+        }
+        return out;
+    }
+
+    static String modelLine(ModelResult m) {
+        Map<String, Integer> classes = new TreeMap<>();
+        m.reactions().forEach(r -> classes.merge(r.reactionClass().label(), 1, Integer::sum));
+        long elements = m.reactions().stream().filter(r -> r.balance().elementImbalanced()
+                && r.balance().reactionClass().balanceComputed()).count();
+        long charge = m.reactions().stream().filter(r -> r.balance().chargeImbalanced()
+                && r.balance().reactionClass().balanceComputed()).count();
+        long unknown = m.reactions().stream().filter(r -> r.balance().reactionClass().balanceComputed()
+                && !r.balance().elementsComputable()).count();
+        List<Finding> all = m.allFindings();
+        StringBuilder classText = new StringBuilder();
+        classes.forEach((k, v) -> classText.append(classText.length() == 0 ? "" : ", ").append(v).append(' ').append(k));
+        return m.file() + ": " + m.reactions().size() + " reactions (" + classText + "); "
+                + elements + " element-imbalanced, " + charge + " charge-imbalanced, " + unknown + " not computable; "
+                + count(all, Severity.ERROR) + " errors, " + count(all, Severity.WARNING) + " warnings, "
+                + count(all, Severity.INFO) + " info";
+    }
+
+    static String reactionLine(ReactionResult r, List<Finding> bad) {
+        ReactionBalance b = r.balance();
+        StringBuilder sb = new StringBuilder(r.id());
+        if (b.elementsComputable()) {
+            b.elements().forEach((symbol, n) -> sb.append("  ").append(symbol).append(' ').append(Deltas.signed(n)));
+        } else {
+            sb.append("  elements ?");
+        }
+        sb.append("  charge ").append(b.charge() == null ? "?" : Deltas.signed(b.charge()));
+        sb.append("  [").append(String.join(", ", bad.stream().map(Finding::ruleId).distinct().toList())).append(']');
+        return sb.toString();
+    }
+
+    private static long count(List<Finding> all, Severity s) {
+        return all.stream().filter(f -> f.severity() == s).count();
+    }
+}

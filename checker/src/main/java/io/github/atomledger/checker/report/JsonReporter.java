@@ -1,0 +1,161 @@
+package io.github.atomledger.checker.report;
+
+import io.github.atomledger.atommapper.formula.Rational;
+import io.github.atomledger.checker.Version;
+import io.github.atomledger.checker.check.Finding;
+import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.check.balance.ReactionBalance;
+import io.github.atomledger.checker.engine.ModelResult;
+import io.github.atomledger.checker.engine.ReactionResult;
+import io.github.atomledger.checker.engine.RunResult;
+
+import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.util.DefaultIndenter;
+import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * Writes {@code report.json}: the machine interface of AtomLedger, documented in
+ * {@code docs/report-schema.json}. Field names are fixed; the shape changes only with
+ * {@link #SCHEMA_VERSION}. UTF-8, '\n' line ends, keys in a fixed order, no timestamps or absolute
+ * paths.
+ */
+public final class JsonReporter implements Reporter {
+
+    /** Bumped on any change of the report's shape. */
+    public static final String SCHEMA_VERSION = "1.0";
+
+    private static final ObjectMapper MAPPER = new ObjectMapper()
+            .configure(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS, false)
+            .configure(JsonGenerator.Feature.AUTO_CLOSE_TARGET, false);
+
+    @Override
+    public ReportFormat format() {
+        return ReportFormat.JSON;
+    }
+
+    @Override
+    public Path write(RunResult result, Path directory) throws IOException {
+        Path file = directory.resolve(ReportFormat.JSON.fileName());
+        ReportFiles.write(file, toJson(result));
+        return file;
+    }
+
+    /** The report as a string, exactly the bytes {@link #write} puts in the file. */
+    public String toJson(RunResult result) throws IOException {
+        DefaultPrettyPrinter printer = new DefaultPrettyPrinter()
+                .withObjectIndenter(new DefaultIndenter("  ", "\n"))
+                .withArrayIndenter(new DefaultIndenter("  ", "\n"));
+        return MAPPER.writer(printer).writeValueAsString(tree(result)) + "\n";
+    }
+
+    static Map<String, Object> tree(RunResult result) {
+        Map<String, Object> root = new LinkedHashMap<>();
+        root.put("schemaVersion", SCHEMA_VERSION);
+        root.put("tool", Map.of("name", "AtomLedger", "version", Version.get()));
+        root.put("summary", summary(result));
+        List<Object> models = new ArrayList<>();
+        for (ModelResult m : result.models()) {
+            models.add(model(m));
+        }
+        root.put("models", models);
+        return root;
+    }
+
+    private static Map<String, Object> summary(RunResult result) {
+        Map<String, Object> s = new LinkedHashMap<>();
+        s.put("models", result.models().size());
+        s.put("reactions", result.models().stream().mapToInt(m -> m.reactions().size()).sum());
+        s.put("findings", severityCounts(result.allFindings()));
+        s.put("failOn", result.config().failOn() == null ? "none" : result.config().failOn().label());
+        s.put("failed", !result.failing().isEmpty());
+        return s;
+    }
+
+    static Map<String, Object> severityCounts(List<Finding> findings) {
+        Map<String, Object> c = new LinkedHashMap<>();
+        for (Severity sev : new Severity[] {Severity.ERROR, Severity.WARNING, Severity.INFO}) {
+            c.put(sev.label(), findings.stream().filter(f -> f.severity() == sev).count());
+        }
+        return c;
+    }
+
+    private static Map<String, Object> model(ModelResult m) {
+        Map<String, Object> o = new LinkedHashMap<>();
+        o.put("file", m.file());
+        o.put("modelId", m.model().modelId());
+        o.put("level", m.model().level());
+        o.put("version", m.model().version());
+        o.put("fbcVersion", m.model().fbcVersion());
+        Map<String, Object> classes = new TreeMap<>();
+        m.reactions().forEach(r -> classes.merge(r.reactionClass().label(), 1, (a, b) -> (Integer) a + (Integer) b));
+        Map<String, Object> summary = new LinkedHashMap<>();
+        summary.put("species", m.model().species().size());
+        summary.put("reactions", m.reactions().size());
+        summary.put("classes", classes);
+        summary.put("elementImbalanced", m.reactions().stream().filter(r -> r.balance().elementImbalanced()).count());
+        summary.put("chargeImbalanced", m.reactions().stream().filter(r -> r.balance().chargeImbalanced()).count());
+        summary.put("findings", severityCounts(m.allFindings()));
+        o.put("summary", summary);
+        o.put("findings", findings(m.modelFindings()));
+        List<Object> reactions = new ArrayList<>();
+        for (ReactionResult r : m.reactions()) {
+            reactions.add(reaction(r));
+        }
+        o.put("reactions", reactions);
+        return o;
+    }
+
+    private static Map<String, Object> reaction(ReactionResult r) {
+        Map<String, Object> o = new LinkedHashMap<>();
+        ReactionBalance b = r.balance();
+        o.put("id", r.id());
+        o.put("name", r.reaction().name());
+        o.put("line", r.reaction().line());
+        o.put("class", b.reactionClass().label());
+        o.put("classSource", b.classification().source());
+        Map<String, Object> balance = new LinkedHashMap<>();
+        balance.put("computable", b.elementsComputable());
+        Map<String, String> elements = new TreeMap<>();
+        if (b.elementsComputable()) {
+            for (Map.Entry<String, Rational> e : b.elements().entrySet()) {
+                elements.put(e.getKey(), e.getValue().toString());
+            }
+        }
+        balance.put("elements", b.elementsComputable() ? elements : null);
+        balance.put("charge", b.charge() == null ? null : b.charge().toString());
+        o.put("balance", balance);
+        o.put("findings", findings(r.findings()));
+        return o;
+    }
+
+    static List<Object> findings(List<Finding> findings) {
+        List<Object> out = new ArrayList<>();
+        for (Finding f : findings) {
+            Map<String, Object> o = new LinkedHashMap<>();
+            o.put("ruleId", f.ruleId());
+            o.put("severity", f.severity().label());
+            o.put("modelFile", f.modelFile());
+            o.put("elementId", f.elementId());
+            o.put("line", f.line());
+            o.put("message", f.message());
+            o.put("data", new TreeMap<>(f.data()));
+            out.add(o);
+        }
+        return out;
+    }
+
+    static byte[] utf8(String s) {
+        return s.getBytes(StandardCharsets.UTF_8);
+    }
+}

@@ -1,0 +1,35 @@
+package io.github.atomledger.checker.report;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+
+/** Writes report files whole: a temporary file beside the target, then a move. */
+final class ReportFiles {
+
+    private ReportFiles() {
+    }
+
+    static void write(Path file, String content) throws IOException {
+        write(file, content.getBytes(StandardCharsets.UTF_8));
+    }
+
+    static void write(Path file, byte[] content) throws IOException {
+        Path dir = file.toAbsolutePath().getParent();
+        Files.createDirectories(dir);
+        Path tmp = Files.createTempFile(dir, "." + file.getFileName(), ".tmp");
+        try {
+            Files.write(tmp, content);
+            try {
+                Files.move(tmp, file, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(tmp);
+        }
+    }
+}
