@@ -25,7 +25,7 @@ public record RunConfig(Path baseDirectory, List<String> models, Path reportDire
                         Set<ReportFormat> formats, SeverityPolicy policy, long maxModelBytes) {
 
     /** The default model patterns: every .xml and .xml.gz file below {@code models/}. */
-    public static final List<String> DEFAULT_MODELS = List.of("models/**.xml", "models/**.xml.gz");
+    public static final List<String> DEFAULT_MODELS = List.of("models/**.{xml,xml.gz}");
 
     public RunConfig {
         Objects.requireNonNull(baseDirectory, "baseDirectory");

@@ -19,7 +19,7 @@ import java.util.TreeMap;
  * {@code model.reaction-shape}: a reaction with no participants at all, or a reaction whose net
  * stoichiometry (species to exact net coefficient) equals an earlier reaction's, or its exact
  * reverse (a duplicate). Also reports a model with no reactions. Data: {@code problem}
- * ("empty", "duplicate", "no-reactions"), {@code duplicateOf}.
+ * ("empty", "duplicate", "reverse-duplicate", "no-reactions"), {@code duplicateOf}.
  */
 public final class ReactionShapeCheck implements ModelCheck {
 
@@ -58,13 +58,16 @@ public final class ReactionShapeCheck implements ModelCheck {
                 continue;
             }
             String first = seen.get(net);
-            if (first == null) {
-                first = seen.get(negate(net));
-            }
+            String reverse = first == null ? seen.get(negate(net)) : null;
             if (first != null) {
                 out.add(context.finding(this, r.id(), r.line(), "Reaction " + r.id()
                         + " has the same net stoichiometry as reaction " + first + ".",
                         Map.of("problem", "duplicate", "duplicateOf", first)));
+            } else if (reverse != null) {
+                out.add(context.finding(this, r.id(), r.line(), "Reaction " + r.id()
+                        + " is the exact reverse of reaction " + reverse
+                        + " (intended only when they are different enzymes).",
+                        Map.of("problem", "reverse-duplicate", "duplicateOf", reverse)));
             } else {
                 seen.put(net, r.id());
             }

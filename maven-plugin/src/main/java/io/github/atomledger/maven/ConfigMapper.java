@@ -1,0 +1,113 @@
+package io.github.atomledger.maven;
+
+import io.github.atomledger.checker.check.Finding;
+import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.check.StandardChecks;
+import io.github.atomledger.checker.engine.RunConfig;
+import io.github.atomledger.checker.engine.RunResult;
+import io.github.atomledger.checker.engine.SeverityPolicy;
+import io.github.atomledger.checker.report.ReportFormat;
+
+import java.io.File;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import org.apache.maven.plugin.MojoExecutionException;
+
+/** Turns Mojo parameters into a {@link RunConfig}; shared by the goals. */
+final class ConfigMapper {
+
+    private ConfigMapper() {
+    }
+
+    static RunConfig toConfig(File baseDir, List<String> models, File reportDirectory, String failOnSeverity,
+                              String formats, Map<String, String> severities, Map<String, String> classSeverities,
+                              long maxModelBytes) throws MojoExecutionException {
+        try {
+            List<String> patterns = new ArrayList<>();
+            if (models != null) {
+                for (String m : models) {
+                    for (String part : m.split(",")) {
+                        if (!part.isBlank()) {
+                            patterns.add(part.strip());
+                        }
+                    }
+                }
+            }
+            if (patterns.isEmpty()) {
+                patterns.addAll(RunConfig.DEFAULT_MODELS);
+            }
+            Path base = baseDir.toPath().toAbsolutePath().normalize();
+            Set<ReportFormat> fmt = ReportFormat.parseList(formats);
+            SeverityPolicy policy = SeverityPolicy.of(severities == null ? Map.of() : severities,
+                    classSeverities == null ? Map.of() : classSeverities, StandardChecks.all());
+            return new RunConfig(base, patterns, reportDirectory.toPath().toAbsolutePath().normalize(),
+                    failOn(failOnSeverity), fmt, policy, maxModelBytes);
+        } catch (IllegalArgumentException e) {
+            throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * The report directory: the configured one, else {@code <build directory>/atomledger}. Without
+     * a pom Maven leaves {@code ${project.build.directory}} unexpanded; then {@code target} below
+     * the base directory is used.
+     */
+    static File reportDirectory(File configured, File buildDirectory, File baseDir) {
+        if (configured != null) {
+            return configured;
+        }
+        if (buildDirectory == null || buildDirectory.getPath().contains("${")) {
+            return new File(new File(baseDir, "target"), "atomledger");
+        }
+        return new File(buildDirectory, "atomledger");
+    }
+
+    /** "error", "warning", "info", or "none" to never fail. */
+    static Severity failOn(String value) {
+        String v = value == null ? "" : value.strip().toLowerCase(Locale.ROOT);
+        if (v.equals("none") || v.equals("off") || v.equals("never")) {
+            return null;
+        }
+        try {
+            return Severity.parse(v);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("failOnSeverity: unknown value '" + value
+                    + "'; allowed: error, warning, info, none");
+        }
+    }
+
+    /** The one-paragraph failure summary: counts, the first few rule ids and elements, the report path. */
+    static String failureSummary(RunResult result, List<Path> written, Path base) {
+        List<Finding> failing = result.failing();
+        Map<Severity, Integer> counts = result.countsBySeverity();
+        StringBuilder sb = new StringBuilder("AtomLedger: ").append(failing.size()).append(" finding(s) at or above '")
+                .append(result.config().failOn().label()).append("' (").append(counts.get(Severity.ERROR))
+                .append(" errors, ").append(counts.get(Severity.WARNING)).append(" warnings, ")
+                .append(counts.get(Severity.INFO)).append(" info): ");
+        Set<String> shown = new LinkedHashSet<>();
+        for (Finding f : failing) {
+            shown.add(f.ruleId() + " " + f.elementId());
+            if (shown.size() == 5) {
+                break;
+            }
+        }
+        sb.append(String.join(", ", shown));
+        if (failing.size() > shown.size()) {
+            sb.append(", ...");
+        }
+        if (!written.isEmpty()) {
+            sb.append("; report: ").append(display(base, written.get(0)));
+        }
+        return sb.toString();
+    }
+
+    static String display(Path base, Path p) {
+        Path abs = p.toAbsolutePath().normalize();
+        return abs.startsWith(base) ? base.relativize(abs).toString().replace('\\', '/') : abs.toString();
+    }
+}
