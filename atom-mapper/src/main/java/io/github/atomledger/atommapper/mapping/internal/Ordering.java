@@ -22,7 +22,7 @@ import java.util.Map;
  */
 final class Ordering {
 
-    private static final int ROUNDS = 4;
+    private static final int ROUNDS = 6;
 
     private final SideGraph r;
     private final SideGraph p;
@@ -82,6 +82,10 @@ final class Ordering {
         for (int x = 0; x < p.n; x++) {
             productEnv.merge(invP[ROUNDS - 1][x], 1, Integer::sum);
         }
+        Map<Long, Integer> reactantEnv = new HashMap<>();
+        for (int a = 0; a < r.n; a++) {
+            reactantEnv.merge(invR[ROUNDS - 1][a], 1, Integer::sum);
+        }
         List<Integer> molecules = new ArrayList<>();
         for (int m = 0; m < r.moleculeCount(); m++) {
             molecules.add(m);
@@ -114,8 +118,13 @@ final class Ordering {
                 long rootScore = Long.MAX_VALUE;
                 for (int a = off; a < end; a++) {
                     if (!seen[a] && r.element[a].equals("C")) {
+                        // A good root has an unchanged environment on the product side, with a
+                        // partner for every reactant atom that looks the same (so a second copy of
+                        // a molecule does not start from a spot the first copy took), and few
+                        // such partners.
                         int freq = productEnv.getOrDefault(invR[ROUNDS - 1][a], 0);
-                        long score = (freq == 0 ? 1_000_000L : freq) * 100 - r.nbr[a].length;
+                        int need = reactantEnv.get(invR[ROUNDS - 1][a]);
+                        long score = (freq < need ? 1_000_000L : freq) * 100 - r.nbr[a].length;
                         if (score < rootScore) {
                             rootScore = score;
                             root = a;
