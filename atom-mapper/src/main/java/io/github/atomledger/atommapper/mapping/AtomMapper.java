@@ -111,15 +111,29 @@ public final class AtomMapper {
                     + ", proven lower bound " + lower + ")", elapsed(start));
         }
         boolean complete = search.enumerateCoOptimal();
-        String mainKey = writer.symmetryKey(best);
+        // Ties in bond edits are broken by the carbons' hydrogen changes: the C-H bonds that the
+        // implicit-hydrogen graph does not see, but that the full BE-matrix distance counts.
+        List<int[]> candidates = new ArrayList<>();
+        candidates.add(best);
+        candidates.addAll(search.coOptimal());
+        int fewest = Integer.MAX_VALUE;
+        for (int[] m : candidates) {
+            fewest = Math.min(fewest, writer.carbonHydrogenChanges(m));
+        }
+        int[] main = null;
         List<int[]> others = new ArrayList<>();
         TreeSet<String> keys = new TreeSet<>();
-        keys.add(mainKey);
-        for (int[] m : search.coOptimal()) {
-            if (keys.add(writer.symmetryKey(m)) && others.size() < options.maxAlternatives()) {
+        for (int[] m : candidates) {
+            if (writer.carbonHydrogenChanges(m) != fewest || !keys.add(writer.symmetryKey(m))) {
+                continue;
+            }
+            if (main == null) {
+                main = m;
+            } else if (others.size() < options.maxAlternatives()) {
                 others.add(m);
             }
         }
+        best = main;
         if (!others.isEmpty()) {
             return writer.result(id, MappingStatus.AMBIGUOUS, best, search.upper(), search.upper(), others,
                     complete ? "" : "more co-optimal maps may exist: their enumeration hit the budget",

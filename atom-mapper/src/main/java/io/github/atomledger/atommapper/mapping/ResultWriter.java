@@ -49,6 +49,17 @@ final class ResultWriter {
                 List.copyOf(prochiral), mappedSmiles(map), new TreeMap<>(), reason, elapsed);
     }
 
+    /** Sum over reactant carbons of the change in attached hydrogens. */
+    int carbonHydrogenChanges(int[] map) {
+        int total = 0;
+        for (int u = 0; u < map.length; u++) {
+            if (r.element(u).equals("C")) {
+                total += Math.abs(r.hydrogens(u) - p.hydrogens(map[u]));
+            }
+        }
+        return total;
+    }
+
     /** Multiset of (reactant class, product class) over carbons, as text: equal iff same up to symmetry. */
     String symmetryKey(int[] map) {
         List<Long> pairs = new ArrayList<>();
