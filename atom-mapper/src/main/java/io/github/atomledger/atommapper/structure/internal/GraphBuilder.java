@@ -110,16 +110,25 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
                 }
             }
         }
-        String canonical;
-        try {
-            canonical = new SmilesGenerator(SmiFlavor.Absolute | SmiFlavor.UseAromaticSymbols)
-                    .create(mol);
-        } catch (CDKException e) {
-            throw new StructureException("cannot write canonical SMILES for '" + source + "': "
-                    + e.getMessage(), e);
+        String canonical = canonical(mol, SmiFlavor.Absolute | SmiFlavor.UseAromaticSymbols);
+        if (canonical == null) {
+            // CDK labels stereo through InChI, which refuses some inputs (a bare proton, for
+            // one); the constitution alone is canonical enough for a fingerprint then.
+            canonical = canonical(mol, SmiFlavor.Canonical | SmiFlavor.UseAromaticSymbols);
+        }
+        if (canonical == null) {
+            throw new StructureException("cannot write canonical SMILES for '" + source + "'");
         }
         return new GraphBuilder(elements, neighbours, codes, orbits, hydrogens,
                 heavy.stream().mapToInt(Integer::intValue).toArray(), canonical);
+    }
+
+    private static String canonical(IAtomContainer mol, int flavor) {
+        try {
+            return new SmilesGenerator(flavor).create(mol);
+        } catch (CDKException | RuntimeException e) {
+            return null;
+        }
     }
 
     private static int code(IBond b) {
