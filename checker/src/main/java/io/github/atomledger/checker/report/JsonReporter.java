@@ -62,7 +62,7 @@ public final class JsonReporter implements Reporter {
     static Map<String, Object> tree(RunResult result) {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("schemaVersion", SCHEMA_VERSION);
-        root.put("tool", Map.of("name", "AtomLedger", "version", Version.get()));
+        root.put("tool", SarifReporter.obj("name", "AtomLedger", "version", Version.get()));
         root.put("summary", summary(result));
         List<Object> models = new ArrayList<>();
         for (ModelResult m : result.models()) {

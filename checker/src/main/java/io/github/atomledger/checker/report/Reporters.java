@@ -18,6 +18,10 @@ public final class Reporters {
 
     static {
         ALL.put(ReportFormat.JSON, JsonReporter::new);
+        ALL.put(ReportFormat.HTML, HtmlReporter::new);
+        ALL.put(ReportFormat.JUNIT, JunitReporter::new);
+        ALL.put(ReportFormat.SARIF, SarifReporter::new);
+        ALL.put(ReportFormat.MARKDOWN, MarkdownReporter::new);
     }
 
     private final List<Reporter> reporters;
@@ -32,6 +36,15 @@ public final class Reporters {
      * @throws IllegalArgumentException for a format this build cannot write yet
      */
     public static Reporters forFormats(Set<ReportFormat> formats) {
+        return forFormats(formats, MappingSource.NONE);
+    }
+
+    /**
+     * The reporters for these formats; the HTML report draws the atom maps {@code mappings} gives.
+     *
+     * @throws IllegalArgumentException for a format this build cannot write yet
+     */
+    public static Reporters forFormats(Set<ReportFormat> formats, MappingSource mappings) {
         List<Reporter> list = new ArrayList<>();
         for (ReportFormat f : ReportFormat.values()) {
             if (!formats.contains(f)) {
@@ -41,7 +54,7 @@ public final class Reporters {
             if (s == null) {
                 throw new IllegalArgumentException("report format '" + f.label() + "' is not available in this version");
             }
-            list.add(s.get());
+            list.add(f == ReportFormat.HTML ? new HtmlReporter(mappings) : s.get());
         }
         return new Reporters(list);
     }

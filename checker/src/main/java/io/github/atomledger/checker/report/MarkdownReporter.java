@@ -1,0 +1,114 @@
+package io.github.atomledger.checker.report;
+
+import io.github.atomledger.checker.check.Finding;
+import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.engine.ModelResult;
+import io.github.atomledger.checker.engine.RunResult;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * Writes {@code summary.md}, a short GitHub-flavoured Markdown page for CI job summaries: the
+ * verdict, one table row per model (reactions, imbalanced reactions, findings by severity), the
+ * worst findings (most severe first, then file and line; at most {@link #MAX_FINDINGS}), and the
+ * relative path of the HTML report. Table cells are escaped; no timestamps or absolute paths.
+ */
+public final class MarkdownReporter implements Reporter {
+
+    /** The most findings listed. */
+    public static final int MAX_FINDINGS = 15;
+
+    private static final Comparator<Finding> WORST_FIRST =
+            Comparator.comparing(Finding::severity).reversed().thenComparing(Finding.ORDER);
+
+    @Override
+    public ReportFormat format() {
+        return ReportFormat.MARKDOWN;
+    }
+
+    @Override
+    public Path write(RunResult result, Path directory) throws IOException {
+        Path file = directory.resolve(ReportFormat.MARKDOWN.fileName());
+        ReportFiles.write(file, toMarkdown(result));
+        return file;
+    }
+
+    /** The page, exactly the bytes {@link #write} puts in the file. */
+    public String toMarkdown(RunResult result) {
+        StringBuilder md = new StringBuilder();
+        Map<Severity, Integer> counts = result.countsBySeverity();
+        boolean failed = !result.failing().isEmpty();
+        md.append("## AtomLedger: ").append(failed ? "failed" : "passed").append("\n\n");
+        md.append(result.models().size()).append(" model(s), ")
+                .append(result.models().stream().mapToInt(m -> m.reactions().size()).sum()).append(" reactions; ")
+                .append(counts.get(Severity.ERROR)).append(" errors, ").append(counts.get(Severity.WARNING))
+                .append(" warnings, ").append(counts.get(Severity.INFO)).append(" info");
+        md.append(result.config().failOn() == null ? " (the build never fails on findings)"
+                : " (fails at " + result.config().failOn().label() + ")").append(".\n\n");
+
+        md.append("| model | reactions | element-imbalanced | charge-imbalanced | errors | warnings | info |\n");
+        md.append("|---|--:|--:|--:|--:|--:|--:|\n");
+        for (ModelResult m : result.models()) {
+            List<Finding> all = m.allFindings();
+            md.append("| ").append(cell(m.file())).append(" | ").append(m.reactions().size())
+                    .append(" | ").append(m.reactions().stream().filter(r -> r.balance().elementImbalanced()).count())
+                    .append(" | ").append(m.reactions().stream().filter(r -> r.balance().chargeImbalanced()).count())
+                    .append(" | ").append(count(all, Severity.ERROR)).append(" | ").append(count(all, Severity.WARNING))
+                    .append(" | ").append(count(all, Severity.INFO)).append(" |\n");
+        }
+
+        List<Finding> worst = result.allFindings().stream().sorted(WORST_FIRST).limit(MAX_FINDINGS).toList();
+        int total = result.allFindings().size();
+        if (!worst.isEmpty()) {
+            md.append("\n### ").append(total > worst.size() ? "Worst " + worst.size() + " of " + total + " findings"
+                    : "Findings").append("\n\n");
+            md.append("| severity | rule | element | location | message |\n");
+            md.append("|---|---|---|---|---|\n");
+            for (Finding f : worst) {
+                md.append("| ").append(f.severity().label()).append(" | `").append(code(f.ruleId())).append("` | `")
+                        .append(code(f.elementId())).append("` | ")
+                        .append(cell(f.modelFile() + (f.line() > 0 ? ":" + f.line() : ""))).append(" | ")
+                        .append(cell(f.message())).append(" |\n");
+            }
+            Map<String, Integer> byRule = new TreeMap<>();
+            result.allFindings().forEach(f -> byRule.merge(f.ruleId(), 1, Integer::sum));
+            md.append("\nBy rule: ");
+            StringBuilder rules = new StringBuilder();
+            byRule.forEach((k, v) -> rules.append(rules.length() == 0 ? "" : ", ").append('`').append(code(k))
+                    .append("` ").append(v));
+            md.append(rules).append(".\n");
+        }
+        if (result.config().formats().contains(ReportFormat.HTML)) {
+            md.append("\nFull report: [").append(ReportFormat.HTML.fileName()).append("](")
+                    .append(ReportFormat.HTML.fileName()).append(") in the same directory as this summary.\n");
+        }
+        return md.toString();
+    }
+
+    private static long count(List<Finding> all, Severity s) {
+        return all.stream().filter(f -> f.severity() == s).count();
+    }
+
+    /** Escapes what would break a table cell or start Markdown/HTML markup. */
+    static String cell(String text) {
+        StringBuilder sb = new StringBuilder();
+        for (char c : text.toCharArray()) {
+            switch (c) {
+                case '|', '\\', '*', '_', '`', '[', ']', '<', '>', '#' -> sb.append('\\').append(c);
+                case '\n', '\r' -> sb.append(' ');
+                default -> sb.append(c);
+            }
+        }
+        return sb.toString();
+    }
+
+    /** Inside a code span only '|' and backticks matter. */
+    static String code(String text) {
+        return text.replace("`", "'").replace("|", "\\|");
+    }
+}

@@ -1,0 +1,27 @@
+package io.github.atomledger.checker.report;
+
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * What the HTML report shows of one reaction's atom map: a status, a one-line summary, notes, and
+ * the drawing as SVG (with and without atom indices). Built from an atom-mapper result by
+ * {@link ReactionMappings#of}; the report only places it.
+ *
+ * @param status         the mapping status label ("mapped", "ambiguous", "best-found", "unmappable",
+ *                       "too-large"), used for the status filter
+ * @param summary        one sentence for people, e.g. "6 carbons mapped, 4 bond edits (proven minimum)"
+ * @param svg            a self-contained SVG document without atom indices, or "" when there is no drawing
+ * @param svgWithIndices the same drawing with atom indices, or "" when there is none
+ * @param notes          further sentences (stereo pins, reasons), in a stable order
+ */
+public record ReactionMapping(String status, String summary, String svg, String svgWithIndices, List<String> notes) {
+
+    public ReactionMapping {
+        Objects.requireNonNull(status, "status");
+        summary = summary == null ? "" : summary;
+        svg = svg == null ? "" : svg;
+        svgWithIndices = svgWithIndices == null ? "" : svgWithIndices;
+        notes = List.copyOf(notes);
+    }
+}
