@@ -17,8 +17,10 @@ final class HtmlModel {
     private final ModelResult m;
     private final Map<String, ReactionMapping> maps;
     private final String idPrefix;
+    private final int[] pictureBudget;
 
-    HtmlModel(XmlOut x, ModelResult m, Map<String, ReactionMapping> maps, String idPrefix) {
+    HtmlModel(XmlOut x, ModelResult m, Map<String, ReactionMapping> maps, String idPrefix, int[] pictureBudget) {
+        this.pictureBudget = pictureBudget;
         this.x = x;
         this.m = m;
         this.maps = maps;
@@ -38,7 +40,12 @@ final class HtmlModel {
         modelFindings();
         Map<String, SpeciesChemistry> chemistry = BalanceTable.chemistry(m.model());
         for (ReactionResult r : m.reactions()) {
-            new HtmlReaction(x, m, r, maps.get(r.id()), chemistry, idPrefix).write();
+            ReactionMapping map = maps.get(r.id());
+            boolean drawn = map != null && !map.svg().isEmpty() && pictureBudget[0] > 0;
+            if (drawn) {
+                pictureBudget[0]--;
+            }
+            new HtmlReaction(x, m, r, map, chemistry, idPrefix, drawn).write();
         }
         x.end().nl();
     }
@@ -63,8 +70,8 @@ final class HtmlModel {
 
         x.start("div", "card").leaf("h3", null, "balance");
         x.start("table");
-        row("element-imbalanced", m.reactions().stream().filter(r -> r.balance().elementImbalanced()).count());
-        row("charge-imbalanced", m.reactions().stream().filter(r -> r.balance().chargeImbalanced()).count());
+        row("element-imbalanced", m.reactions().stream().filter(r -> r.reactionClass().balanceComputed() && r.balance().elementImbalanced()).count());
+        row("charge-imbalanced", m.reactions().stream().filter(r -> r.reactionClass().balanceComputed() && r.balance().chargeImbalanced()).count());
         row("not computable", m.reactions().stream().filter(r -> r.reactionClass().balanceComputed()
                 && !r.balance().elementsComputable()).count());
         row("not checked (class)", m.reactions().stream().filter(r -> !r.reactionClass().balanceComputed()).count());

@@ -24,9 +24,11 @@ final class HtmlReaction {
     private final ReactionMapping map;
     private final Map<String, SpeciesChemistry> chemistry;
     private final String idPrefix;
+    private final boolean pictureAllowed;
 
     HtmlReaction(XmlOut x, ModelResult m, ReactionResult r, ReactionMapping map,
-                 Map<String, SpeciesChemistry> chemistry, String idPrefix) {
+                 Map<String, SpeciesChemistry> chemistry, String idPrefix, boolean pictureAllowed) {
+        this.pictureAllowed = pictureAllowed;
         this.x = x;
         this.m = m;
         this.r = r;
@@ -201,16 +203,15 @@ final class HtmlReaction {
             return;
         }
         x.start("figure", "pic").nl();
-        String base = idPrefix + "-" + HtmlReporter.token(r.id());
         if (!map.svg().isEmpty()) {
-            x.start("div", "pic-plain");
-            SvgEmbed.copy(map.svg(), base + "-p-", x.writer());
-            x.end().nl();
-        }
-        if (!map.svgWithIndices().isEmpty()) {
-            x.start("div", "pic-idx");
-            SvgEmbed.copy(map.svgWithIndices(), base + "-i-", x.writer());
-            x.end().nl();
+            if (pictureAllowed) {
+                x.start("div", "pic-box");
+                SvgEmbed.copy(map.svg(), idPrefix + "-" + HtmlReporter.token(r.id()) + "-", x.writer());
+                x.end().nl();
+            } else {
+                x.leaf("p", "nomap", "Drawing left out: the report holds at most " + HtmlReporter.MAX_PICTURES
+                        + " pictures.").nl();
+            }
         }
         StringBuilder caption = new StringBuilder(map.summary());
         if (!map.svg().isEmpty()) {

@@ -34,6 +34,9 @@ public final class HtmlReporter implements Reporter {
 
     static final String NO_MAP = "no-map";
 
+    /** The most drawings one report holds (each is some 30 kB of SVG); later ones are left out. */
+    public static final int MAX_PICTURES = 400;
+
     private final MappingSource mappings;
 
     public HtmlReporter() {
@@ -96,8 +99,9 @@ public final class HtmlReporter implements Reporter {
             nav(x, severities, new ArrayList<>(rules), new ArrayList<>(statuses));
             x.start("main").nl();
             int index = 0;
+            int[] budget = {MAX_PICTURES};
             for (ModelResult m : result.models()) {
-                new HtmlModel(x, m, maps.get(m), "m" + index++).write();
+                new HtmlModel(x, m, maps.get(m), "m" + index++, budget).write();
             }
             x.end().nl();
             x.end().nl();

@@ -61,9 +61,8 @@ final class HtmlStyle {
             figure.pic{margin:8px 0;overflow-x:auto}
             figure.pic svg{max-width:100%;height:auto;background:#fff}
             figure.pic figcaption{font-size:12px;color:var(--mute)}
-            .pic-idx{display:none}
-            #show-idx:checked ~ main .pic-idx{display:block}
-            #show-idx:checked ~ main .pic-plain{display:none}
+            figure.pic svg .annotation{display:none}
+            #show-idx:checked ~ main figure.pic svg .annotation{display:inline}
             .nomap{color:var(--mute);font-size:13px;margin:4px 0}
             details>summary{cursor:pointer;color:var(--mute);font-size:13px}
             """;

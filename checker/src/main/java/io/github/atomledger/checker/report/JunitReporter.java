@@ -21,7 +21,7 @@ import javax.xml.stream.XMLStreamException;
  * model-level findings. A case fails when it has findings at or above the fail threshold
  * ({@code error} when the run never fails); each failure carries the messages. Lower findings go
  * to the case's {@code <system-out>}. Balance cases of reactions whose class is not balance-checked
- * (exchange, demand, sink) are {@code <skipped>}. Times are always 0 so the file is byte-stable.
+ * (exchange, demand, sink) are {@code <skipped>} unless they have a failing finding. Times are always 0 so the file is byte-stable.
  */
 public final class JunitReporter implements Reporter {
 
@@ -86,7 +86,8 @@ public final class JunitReporter implements Reporter {
             for (String family : families) {
                 List<Finding> mine = r.findings().stream().filter(f -> Families.of(f.ruleId()).equals(family)).toList();
                 String skipped = null;
-                if (family.equals("balance") && !r.reactionClass().balanceComputed() && mine.isEmpty()) {
+                if (family.equals("balance") && !r.reactionClass().balanceComputed()
+                        && mine.stream().noneMatch(f -> f.severity().atLeast(threshold))) {
                     skipped = r.reactionClass().label() + " reaction: balance is not checked for this class";
                 }
                 cases.add(newCase(stem + "." + family, r.id(), mine, threshold, skipped));

@@ -11,17 +11,17 @@ import java.util.Objects;
  * @param status         the mapping status label ("mapped", "ambiguous", "best-found", "unmappable",
  *                       "too-large"), used for the status filter
  * @param summary        one sentence for people, e.g. "6 carbons mapped, 4 bond edits (proven minimum)"
- * @param svg            a self-contained SVG document without atom indices, or "" when there is no drawing
- * @param svgWithIndices the same drawing with atom indices, or "" when there is none
+ * @param svg            a self-contained SVG document, or "" when there is no drawing; atom indices
+ *                       are drawn as elements of class {@code annotation}, which the report shows
+ *                       only on request
  * @param notes          further sentences (stereo pins, reasons), in a stable order
  */
-public record ReactionMapping(String status, String summary, String svg, String svgWithIndices, List<String> notes) {
+public record ReactionMapping(String status, String summary, String svg, List<String> notes) {
 
     public ReactionMapping {
         Objects.requireNonNull(status, "status");
         summary = summary == null ? "" : summary;
         svg = svg == null ? "" : svg;
-        svgWithIndices = svgWithIndices == null ? "" : svgWithIndices;
         notes = List.copyOf(notes);
     }
 }

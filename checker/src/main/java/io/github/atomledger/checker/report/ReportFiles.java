@@ -13,6 +13,13 @@ final class ReportFiles {
     private ReportFiles() {
     }
 
+    /** Temporary files are created owner-only; a report is for everyone who can read the directory. */
+    private static void readableByAll(Path tmp) throws IOException {
+        if (tmp.getFileSystem().supportedFileAttributeViews().contains("posix")) {
+            Files.setPosixFilePermissions(tmp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+        }
+    }
+
     static void write(Path file, String content) throws IOException {
         write(file, content.getBytes(StandardCharsets.UTF_8));
     }
@@ -23,6 +30,7 @@ final class ReportFiles {
         Path tmp = Files.createTempFile(dir, "." + file.getFileName(), ".tmp");
         try {
             Files.write(tmp, content);
+            readableByAll(tmp);
             try {
                 Files.move(tmp, file, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {

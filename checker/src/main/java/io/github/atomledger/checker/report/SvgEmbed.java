@@ -17,11 +17,13 @@ import javax.xml.stream.events.XMLEvent;
  * is parsed, never pasted as text): the XML declaration, DOCTYPE, comments and processing
  * instructions are dropped, scripts and event-handler attributes are refused, and every
  * {@code id} (and {@code url(#..)}/{@code href="#.."} reference) gets a prefix so several
- * drawings can share one page.
+ * drawings can share one page. Coordinates are rounded to 0.1 px (CDK writes three decimals;
+ * a tenth of a pixel is invisible and halves the size of glyph outlines).
  */
 final class SvgEmbed {
 
     private static final Pattern URL_REF = Pattern.compile("url\\(#([^)]+)\\)");
+    private static final Pattern LONG_DECIMAL = Pattern.compile("(-?)(\\d*)\\.(\\d)(\\d+)");
 
     private SvgEmbed() {
     }
@@ -79,10 +81,26 @@ final class SvgEmbed {
         if (attribute.equals("href") && value.startsWith("#")) {
             return "#" + prefix + value.substring(1);
         }
+        if (!attribute.equals("class")) {
+            value = shorten(value);
+        }
         if (value.contains("url(#")) {
             Matcher m = URL_REF.matcher(value);
             return m.replaceAll(mr -> Matcher.quoteReplacement("url(#" + prefix + mr.group(1) + ")"));
         }
         return value;
+    }
+
+    /** Rounds every decimal with more than one fraction digit to one digit (half up). */
+    static String shorten(String value) {
+        if (value.indexOf('.') < 0) {
+            return value;
+        }
+        return LONG_DECIMAL.matcher(value).replaceAll(mr -> {
+            java.math.BigDecimal d = new java.math.BigDecimal((mr.group(2).isEmpty() ? "0" : mr.group(2)) + "."
+                    + mr.group(3) + mr.group(4)).setScale(1, java.math.RoundingMode.HALF_UP);
+            String t = d.stripTrailingZeros().toPlainString();
+            return Matcher.quoteReplacement(t.equals("0") ? "0" : mr.group(1) + t);
+        });
     }
 }

@@ -1,0 +1,77 @@
+package io.github.atomledger.checker.report;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import io.github.atomledger.checker.engine.RunResult;
+
+import java.io.StringReader;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import javax.xml.parsers.DocumentBuilderFactory;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.w3c.dom.Document;
+import org.xml.sax.InputSource;
+
+/** The HTML report on the demo: well-formed, self-contained, with summaries, cards and pictures. */
+class HtmlReporterTest {
+
+    static final Path OUT = Path.of("target", "reports-demo");
+    static RunResult result;
+    static StructureTableMappings mappings;
+    static String html;
+
+    @BeforeAll
+    static void writeDemoReport() throws Exception {
+        result = DemoReports.run(OUT);
+        mappings = new StructureTableMappings(DemoReports.DEMO.resolve("structures.tsv"));
+        DemoReports.writeAll(result, OUT, mappings);
+        html = Files.readString(OUT.resolve("report.html"));
+    }
+
+    static Document parse(String text) throws Exception {
+        DocumentBuilderFactory f = DocumentBuilderFactory.newDefaultInstance();
+        f.setFeature("http://apache.org/xml/features/disallow-doctype-decl", false);
+        f.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
+        f.setExpandEntityReferences(false);
+        return f.newDocumentBuilder().parse(new InputSource(new StringReader(text)));
+    }
+
+    @Test
+    void isWellFormedXmlWithOneArticlePerReaction() throws Exception {
+        Document doc = parse(html);
+        assertThat(doc.getDocumentElement().getTagName()).isEqualTo("html");
+        assertThat(doc.getElementsByTagName("article").getLength()).isEqualTo(result.models().get(0).reactions().size());
+        assertThat(html).startsWith("<!DOCTYPE html>");
+    }
+
+    @Test
+    void fetchesNothingAndRunsNoScript() {
+        assertThat(html).doesNotContain("<script").doesNotContain("http://localhost")
+                .doesNotContainPattern("(src|href)=\"https?:")
+                .doesNotContain("@import").doesNotContain("url(http");
+    }
+
+    @Test
+    void drawsAtomMapsForTheMappedReactionsAndKeepsOthersBalanceOnly() {
+        assertThat(mappings.mapped).isGreaterThan(20);
+        assertThat(html).contains("id=\"m0-R_FBA\"");
+        int svgs = html.split("<svg", -1).length - 1;
+        assertThat(svgs).as("one picture per drawable map").isGreaterThanOrEqualTo(20);
+        assertThat(html).contains("class=\"annotation\"").contains("id=\"show-idx\"");
+        assertThat(html).contains("No atom map for this reaction: balance only.");
+    }
+
+    @Test
+    void showsEquationNamesIdsAndTheBalanceTable() {
+        assertThat(html).contains("fructose-bisphosphate aldolase").contains("<code>fdp_c</code>")
+                .contains("reactants").contains("products");
+    }
+
+    @Test
+    void rendersWithoutMappingData() throws Exception {
+        String plain = new HtmlReporter().toHtml(result);
+        parse(plain);
+        assertThat(plain).doesNotContain("<svg").contains("No atom map for this reaction: balance only.");
+    }
+}
