@@ -52,7 +52,8 @@ class JunitReporterTest {
                 .contains("charge-gap.xml:");
         assertThat(xpath(doc, "count(//testcase[@name='R_HEX' and @classname='charge-gap.model']/failure)")).isEqualTo("0");
         assertThat(xpath(doc, "count(//testcase[@name='R_PGI']/failure)")).isEqualTo("0");
-        assertThat(xpath(doc, "/testsuites/testsuite/@failures")).isEqualTo("1");
+        assertThat(xpath(doc, "/testsuites/testsuite/@failures")).as("R_HEX balance and x_c model").isEqualTo("2");
+        assertThat(xpath(doc, "//testcase[@name='x_c']/failure/@type")).isEqualTo("model.formula-invalid");
     }
 
     @Test
