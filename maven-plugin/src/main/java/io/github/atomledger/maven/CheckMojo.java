@@ -61,9 +61,9 @@ public final class CheckMojo extends AbstractMojo {
 
     /**
      * Report formats, a comma list of {@code json}, {@code html}, {@code junit}, {@code sarif},
-     * {@code markdown}, or {@code all}. Default {@code json}.
+     * {@code markdown}, or {@code all}. Default {@code all}. Example: {@code -Datomledger.formats=json,sarif}.
      */
-    @Parameter(property = "atomledger.formats", defaultValue = "json")
+    @Parameter(property = "atomledger.formats", defaultValue = "all")
     private String formats;
 
     /**
@@ -111,7 +111,8 @@ public final class CheckMojo extends AbstractMojo {
         } catch (IllegalArgumentException e) {
             throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
         }
-        for (String line : ConsoleSummary.lines(result)) {
+        boolean colour = ConsoleSummary.colourWanted(System.getenv(), System.console() != null);
+        for (String line : ConsoleSummary.lines(result, colour)) {
             getLog().info(line);
         }
         for (Path p : written) {

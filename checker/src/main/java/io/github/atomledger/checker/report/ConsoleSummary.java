@@ -16,21 +16,45 @@ import java.util.TreeMap;
 /**
  * The console text of a run: one summary line per model, then one line per reaction with a
  * finding at or above the fail threshold, showing its imbalance ({@code R_PFK  C -20  charge ?}).
- * Plain text; the front end decides about colour.
+ * Plain text by default; {@link #lines(RunResult, boolean)} adds ANSI colour (severity counts
+ * and reaction ids) for a terminal, and {@link #colourWanted} is the rule for when to ask for it.
  */
 public final class ConsoleSummary {
 
     /** At most this many reaction lines per model; the rest are counted. */
-    public static final int MAX_REACTION_LINES = 50;
+    public static final int MAX_REACTION_LINES = 25;
+
+    private static final String RED = "\u001b[31m";
+    private static final String YELLOW = "\u001b[33m";
+    private static final String BOLD = "\u001b[1m";
+    private static final String RESET = "\u001b[0m";
 
     private ConsoleSummary() {
     }
 
+    /** The summary as plain text. */
     public static List<String> lines(RunResult result) {
+        return lines(result, false);
+    }
+
+    /**
+     * Colour only on an interactive terminal: a console is attached, the {@code CI} variable is
+     * unset, {@code NO_COLOR} is unset (no-color.org convention) and {@code TERM} is not
+     * {@code dumb}. Build logs and CI pages therefore stay plain text.
+     *
+     * @param env        the environment (usually {@code System.getenv()})
+     * @param hasConsole whether {@code System.console() != null}
+     */
+    public static boolean colourWanted(java.util.Map<String, String> env, boolean hasConsole) {
+        return hasConsole && !env.containsKey("CI") && !env.containsKey("NO_COLOR") && !"dumb".equals(env.get("TERM"));
+    }
+
+    /** The summary, with ANSI colour when {@code colour} is true. */
+    public static List<String> lines(RunResult result, boolean colour) {
         List<String> out = new ArrayList<>();
         Severity threshold = result.config().failOn() == null ? Severity.ERROR : result.config().failOn();
         for (ModelResult m : result.models()) {
-            out.add(modelLine(m));
+            out.add(colour ? paintCounts(modelLine(m)) : modelLine(m));
             int shown = 0;
             int hidden = 0;
             for (ReactionResult r : m.reactions()) {
@@ -42,7 +66,8 @@ public final class ConsoleSummary {
                     hidden++;
                     continue;
                 }
-                out.add("  " + reactionLine(r, bad));
+                String line = reactionLine(r, bad);
+                out.add("  " + (colour ? BOLD + r.id() + RESET + line.substring(r.id().length()) : line));
             }
             if (hidden > 0) {
                 out.add("  ... and " + hidden + " more reaction(s); see the report");
@@ -54,6 +79,11 @@ public final class ConsoleSummary {
             }
         }
         return out;
+    }
+
+    private static String paintCounts(String line) {
+        return line.replaceFirst("; ([1-9][0-9]*) errors", "; " + RED + "$1 errors" + RESET)
+                .replaceFirst(", ([1-9][0-9]*) warnings", ", " + YELLOW + "$1 warnings" + RESET);
     }
 
     static String modelLine(ModelResult m) {

@@ -28,6 +28,9 @@ import java.util.Optional;
  */
 final class StructureTableMappings implements MappingSource {
 
+    /** Mapping the demo takes half a minute; the test classes of one JVM share the results. */
+    private static final Map<String, ReactionMapping> CACHE = new java.util.concurrent.ConcurrentHashMap<>();
+
     private final Map<String, Structure> structures = new HashMap<>();
     private final AtomMapper mapper = new AtomMapper(MappingOptions.defaults());
     int mapped;
@@ -52,14 +55,16 @@ final class StructureTableMappings implements MappingSource {
         if (left == null || right == null) {
             return Optional.empty();
         }
-        ReactionInput input = new ReactionInput(reaction.id(), left, right);
-        MappingResult result = mapper.map(input);
-        Map<String, String> titles = new HashMap<>();
-        for (SpeciesInfo s : model.model().species()) {
-            titles.put(s.id(), s.name());
-        }
         mapped++;
-        return Optional.of(ReactionMappings.of(input, result, titles));
+        return Optional.of(CACHE.computeIfAbsent(model.file() + "#" + reaction.id(), k -> {
+            ReactionInput input = new ReactionInput(reaction.id(), left, right);
+            MappingResult result = mapper.map(input);
+            Map<String, String> titles = new HashMap<>();
+            for (SpeciesInfo s : model.model().species()) {
+                titles.put(s.id(), s.name());
+            }
+            return ReactionMappings.of(input, result, titles);
+        }));
     }
 
     private List<Participant> side(List<io.github.atomledger.checker.model.Participant> refs) {
