@@ -70,8 +70,8 @@ final class HtmlModel {
 
         x.start("div", "card").leaf("h3", null, "balance");
         x.start("table");
-        row("element-imbalanced", m.reactions().stream().filter(r -> r.reactionClass().balanceComputed() && r.balance().elementImbalanced()).count());
-        row("charge-imbalanced", m.reactions().stream().filter(r -> r.reactionClass().balanceComputed() && r.balance().chargeImbalanced()).count());
+        row("element-imbalanced", ModelCounts.elementImbalanced(m));
+        row("charge-imbalanced", ModelCounts.chargeImbalanced(m));
         row("not computable", m.reactions().stream().filter(r -> r.reactionClass().balanceComputed()
                 && !r.balance().elementsComputable()).count());
         row("not checked (class)", m.reactions().stream().filter(r -> !r.reactionClass().balanceComputed()).count());

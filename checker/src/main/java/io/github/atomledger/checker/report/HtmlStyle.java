@@ -35,7 +35,7 @@ final class HtmlStyle {
             nav.filters label{cursor:pointer;border:1px solid var(--line);border-radius:12px;padding:1px 9px;font-size:13px;background:#fff}
             main{padding:10px 28px 40px}
             section.model{margin:18px 0 28px}
-            section.model>h2{font-size:19px;margin:0 0 8px;border-bottom:1px solid var(--line)}
+            section.model h2{font-size:19px;margin:0 0 8px;border-bottom:1px solid var(--line)}
             .cards{display:flex;flex-wrap:wrap;gap:12px;margin:8px 0 14px}
             .card{background:#fff;border:1px solid var(--line);border-radius:4px;padding:8px 12px;min-width:180px}
             .card h3{margin:0 0 4px;font-size:13px;text-transform:uppercase;letter-spacing:.05em;color:var(--mute)}
@@ -64,7 +64,7 @@ final class HtmlStyle {
             figure.pic svg .annotation{display:none}
             #show-idx:checked ~ main figure.pic svg .annotation{display:inline}
             .nomap{color:var(--mute);font-size:13px;margin:4px 0}
-            details>summary{cursor:pointer;color:var(--mute);font-size:13px}
+            details summary{cursor:pointer;color:var(--mute);font-size:13px}
             """;
 
     /** The rules that make the radio buttons filter, for the values present in this report. */

@@ -56,8 +56,8 @@ public final class MarkdownReporter implements Reporter {
         for (ModelResult m : result.models()) {
             List<Finding> all = m.allFindings();
             md.append("| ").append(cell(m.file())).append(" | ").append(m.reactions().size())
-                    .append(" | ").append(m.reactions().stream().filter(r -> r.reactionClass().balanceComputed() && r.balance().elementImbalanced()).count())
-                    .append(" | ").append(m.reactions().stream().filter(r -> r.reactionClass().balanceComputed() && r.balance().chargeImbalanced()).count())
+                    .append(" | ").append(ModelCounts.elementImbalanced(m))
+                    .append(" | ").append(ModelCounts.chargeImbalanced(m))
                     .append(" | ").append(count(all, Severity.ERROR)).append(" | ").append(count(all, Severity.WARNING))
                     .append(" | ").append(count(all, Severity.INFO)).append(" |\n");
         }

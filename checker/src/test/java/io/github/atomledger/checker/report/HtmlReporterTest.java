@@ -53,6 +53,12 @@ class HtmlReporterTest {
     }
 
     @Test
+    void styleSheetNeedsNoEscapingBecauseHtmlReadsStyleAsRawText() {
+        String css = html.substring(html.indexOf("<style>") + 7, html.indexOf("</style>"));
+        assertThat(css).doesNotContain("&").contains("#show-idx:checked");
+    }
+
+    @Test
     void drawsAtomMapsForTheMappedReactionsAndKeepsOthersBalanceOnly() {
         assertThat(mappings.mapped).isGreaterThan(20);
         assertThat(html).contains("id=\"m0-R_FBA\"");
