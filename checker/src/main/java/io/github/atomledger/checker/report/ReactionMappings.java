@@ -39,14 +39,15 @@ public final class ReactionMappings {
 
     static String summary(MappingResult r) {
         int carbons = r.carbonTransitions().size();
+        String reason = r.reason().isEmpty() || r.reason().endsWith(".") ? r.reason() : r.reason() + ".";
         return switch (r.status()) {
             case MAPPED -> "Mapped: " + carbons + " carbon(s), " + r.cost() + " weighted bond edit(s), proven minimum.";
             case AMBIGUOUS -> "Ambiguous: " + carbons + " carbon(s), " + r.cost()
                     + " weighted bond edit(s), proven minimum, but co-optimal maps move some carbons elsewhere.";
             case BEST_FOUND -> "Best found: " + carbons + " carbon(s), " + r.cost() + " weighted bond edit(s), lower bound "
-                    + r.lowerBound() + " (not proven optimal). " + r.reason();
-            case UNMAPPABLE -> "Not mappable: " + r.reason();
-            case TOO_LARGE -> "Not attempted: " + r.reason();
+                    + r.lowerBound() + " (not proven optimal): " + reason;
+            case UNMAPPABLE -> "Not mappable: " + reason;
+            case TOO_LARGE -> "Not attempted: " + reason;
         };
     }
 }

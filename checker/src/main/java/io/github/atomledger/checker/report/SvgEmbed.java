@@ -17,8 +17,8 @@ import javax.xml.stream.events.XMLEvent;
  * is parsed, never pasted as text): the XML declaration, DOCTYPE, comments and processing
  * instructions are dropped, scripts and event-handler attributes are refused, and every
  * {@code id} (and {@code url(#..)}/{@code href="#.."} reference) gets a prefix so several
- * drawings can share one page. Coordinates are rounded to 0.1 px (CDK writes three decimals;
- * a tenth of a pixel is invisible and halves the size of glyph outlines).
+ * drawings can share one page. Coordinates are rounded to 0.1 px (CDK writes three decimals; a
+ * tenth of a pixel is invisible, and it saves about a fifth of the size of glyph outlines).
  */
 final class SvgEmbed {
 

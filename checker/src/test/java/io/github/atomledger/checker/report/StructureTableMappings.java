@@ -31,8 +31,15 @@ final class StructureTableMappings implements MappingSource {
     /** Mapping the demo takes half a minute; the test classes of one JVM share the results. */
     private static final Map<String, ReactionMapping> CACHE = new java.util.concurrent.ConcurrentHashMap<>();
 
+    static final long NODE_LIMIT = 300_000;
+
     private final Map<String, Structure> structures = new HashMap<>();
-    private final AtomMapper mapper = new AtomMapper(MappingOptions.defaults());
+    /**
+     * A node budget instead of the default two-second time budget, so the pictures (and the
+     * report's bytes) do not depend on how busy the machine is.
+     */
+    private final AtomMapper mapper = new AtomMapper(MappingOptions.defaults()
+            .withTimeBudget(java.time.Duration.ofMinutes(2)).withNodeLimit(NODE_LIMIT));
     int mapped;
 
     StructureTableMappings(Path table) throws IOException, StructureException {
