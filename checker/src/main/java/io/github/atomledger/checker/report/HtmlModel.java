@@ -93,10 +93,10 @@ final class HtmlModel {
     }
 
     private void table(Map<String, Long> counts, String caption) throws XMLStreamException {
-        x.start("table");
         if (caption != null) {
-            x.leaf("caption", null, caption);
+            x.leaf("p", "sub", caption);
         }
+        x.start("table");
         for (Map.Entry<String, Long> e : counts.entrySet()) {
             row(e.getKey(), e.getValue());
         }

@@ -38,6 +38,7 @@ final class HtmlStyle {
             section.model h2{font-size:19px;margin:0 0 8px;border-bottom:1px solid var(--line)}
             .cards{display:flex;flex-wrap:wrap;gap:12px;margin:8px 0 14px}
             .card{background:#fff;border:1px solid var(--line);border-radius:4px;padding:8px 12px;min-width:180px}
+            .card .sub{margin:0 0 4px;font-size:13px;white-space:nowrap}
             .card h3{margin:0 0 4px;font-size:13px;text-transform:uppercase;letter-spacing:.05em;color:var(--mute)}
             table{border-collapse:collapse;font-size:13px}
             td,th{padding:2px 8px;text-align:left;border-bottom:1px solid #eee}

@@ -53,12 +53,16 @@ class HtmlBrowserTest {
 
     /** Runs Chromium with the given extra flags; returns stdout, or skips when it cannot run. */
     private static String browse(String... extra) throws IOException, InterruptedException {
+        return browse(page, extra);
+    }
+
+    private static String browse(Path target, String... extra) throws IOException, InterruptedException {
         Path profile = Files.createTempDirectory("atomledger-chromium-");
         List<String> cmd = new ArrayList<>(List.of(chromium, "--headless", "--no-sandbox", "--disable-gpu",
                 "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update",
                 "--disable-sync", "--user-data-dir=" + profile));
         cmd.addAll(List.of(extra));
-        cmd.add(page.toUri().toString());
+        cmd.add(target.toUri().toString());
         Path stdout = Files.createTempFile(OUT.toAbsolutePath(), "chromium", ".out");
         Process p = new ProcessBuilder(cmd).redirectErrorStream(false).redirectOutput(stdout.toFile())
                 .redirectError(ProcessBuilder.Redirect.DISCARD).start();
@@ -95,6 +99,24 @@ class HtmlBrowserTest {
         // Okabe–Ito orange (#E69F00) and sky blue (#56B4E9) glows of the first reactant carbons
         assertThat(pixelsNear(img, 0xE6, 0x9F, 0x00)).isGreaterThan(200);
         assertThat(pixelsNear(img, 0x56, 0xB4, 0xE9)).isGreaterThan(200);
+    }
+
+    @Test
+    void severityFilterHidesEveryCardWithoutAnError() throws Exception {
+        // The demo has no error: with the "error" filter chosen no reaction card, so no drawing, shows.
+        String html = Files.readString(page).replace("id=\"sev-all\" class=\"radio\" checked=\"checked\"",
+                "id=\"sev-all\" class=\"radio\"").replace("id=\"sev-error\" class=\"radio\"",
+                "id=\"sev-error\" class=\"radio\" checked=\"checked\"");
+        assertThat(html).contains("id=\"sev-error\" class=\"radio\" checked=\"checked\"");
+        Path filtered = OUT.resolve("filtered.html").toAbsolutePath();
+        Files.writeString(filtered, html);
+        Path png = OUT.resolve("filtered.png").toAbsolutePath();
+        Files.deleteIfExists(png);
+        browse(filtered, "--screenshot=" + png, "--window-size=1280,1600", "--hide-scrollbars");
+        assumeTrue(Files.isRegularFile(png), "chromium wrote no screenshot; skipping");
+        BufferedImage img = ImageIO.read(png.toFile());
+        // sky blue (#56B4E9) appears only in the drawings
+        assertThat(pixelsNear(img, 0x56, 0xB4, 0xE9)).isZero();
     }
 
     private static int count(String text, String needle) {
