@@ -84,10 +84,17 @@ public final class MarkdownReporter implements Reporter {
             md.append(rules).append(".\n");
         }
         if (result.config().formats().contains(ReportFormat.HTML)) {
-            md.append("\nFull report: [").append(ReportFormat.HTML.fileName()).append("](")
-                    .append(ReportFormat.HTML.fileName()).append(") in the same directory as this summary.\n");
+            md.append("\nFull report: [").append(cell(htmlPath(result))).append("](")
+                    .append(ReportFormat.HTML.fileName()).append(") (beside this summary).\n");
         }
         return md.toString();
+    }
+
+    /** The HTML report relative to the project directory, or its bare name when the reports lie elsewhere. */
+    static String htmlPath(RunResult result) {
+        Path base = result.config().baseDirectory().toAbsolutePath().normalize();
+        Path html = result.config().reportDirectory().toAbsolutePath().normalize().resolve(ReportFormat.HTML.fileName());
+        return html.startsWith(base) ? base.relativize(html).toString().replace('\\', '/') : ReportFormat.HTML.fileName();
     }
 
     private static long count(List<Finding> all, Severity s) {

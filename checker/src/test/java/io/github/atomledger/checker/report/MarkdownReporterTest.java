@@ -17,7 +17,7 @@ class MarkdownReporterTest {
         int firstInfo = md.indexOf("\n| info |");
         assertThat(firstError).isPositive();
         assertThat(firstInfo < 0 || firstInfo > firstError).isTrue();
-        assertThat(md).contains("Full report: [report.html](report.html)");
+        assertThat(md).contains("Full report: [target/atomledger/report.html](report.html) (beside this summary).");
         assertThat(md).doesNotContain("\r").endsWith("\n");
     }
 
