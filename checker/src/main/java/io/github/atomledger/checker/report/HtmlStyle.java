@@ -64,6 +64,7 @@ final class HtmlStyle {
             figure.pic figcaption{font-size:12px;color:var(--mute)}
             figure.pic svg .annotation{display:none}
             #show-idx:checked ~ main figure.pic svg .annotation{display:inline}
+            #show-idx:checked ~ nav label[for=show-idx]{background:var(--ink);color:#fff}
             .nomap{color:var(--mute);font-size:13px;margin:4px 0}
             details summary{cursor:pointer;color:var(--mute);font-size:13px}
             """;
