@@ -27,8 +27,8 @@ import java.util.Set;
  */
 public final class Search {
 
-    /** Raw carbon assignments kept in phase 2 before the enumeration stops. */
-    static final int RAW_CAP = 256;
+    /** Distinct carbon symmetry classes collected in phase 2 before the enumeration stops. */
+    static final int CLASS_CAP = 64;
 
     final SideGraph r;
     final SideGraph p;
@@ -137,7 +137,7 @@ public final class Search {
 
     /**
      * Runs phase 2 at the proven optimal cost; returns true when the enumeration finished (false:
-     * budget or {@link #RAW_CAP} reached).
+     * budget or {@link #CLASS_CAP} reached).
      */
     public boolean enumerateCoOptimal() {
         enumerate = true;
@@ -166,7 +166,7 @@ public final class Search {
         return stop ? Math.max(root, Math.min(openMin, upper)) : upper;
     }
 
-    /** Complete co-optimal maps from phase 2, one per distinct raw carbon assignment, in finding order. */
+    /** Complete co-optimal maps from phase 2, one per carbon symmetry class, in finding order. */
     public List<int[]> coOptimal() {
         return new ArrayList<>(carbonMaps.values());
     }
@@ -264,16 +264,32 @@ public final class Search {
         if (!seenCarbon.add(raw)) {
             return;
         }
+        // A carbon assignment in a symmetry class that already has an optimal completion adds
+        // nothing: only the first of each class is completed.
+        String cls = classKey(depth);
+        if (carbonMaps.containsKey(cls)) {
+            return;
+        }
         completing = true;
         completed = false;
         dfs(depth, g);
         if (completed) {
-            carbonMaps.put(raw, completedMap);
-            if (carbonMaps.size() >= RAW_CAP) {
+            carbonMaps.put(cls, completedMap);
+            if (carbonMaps.size() >= CLASS_CAP) {
                 stop = true;
             }
         }
         completing = false;
+    }
+
+    private String classKey(int depth) {
+        long[] pairs = new long[depth];
+        for (int k = 0; k < depth; k++) {
+            int u = order[k];
+            pairs[k] = ((long) r.orbitKey[u] << 32) | p.orbitKey[map[u]];
+        }
+        Arrays.sort(pairs);
+        return Arrays.toString(pairs);
     }
 
     private void leaf(int g) {
