@@ -29,6 +29,10 @@ class AtomMapperTest {
         assertThat(two).isEqualTo(one);
         assertThat(two).extracting(MappingResult::reactionId).containsExactly("CS", "MCM", "PDC", "TKT", "THL", "GAPDH");
         assertThat(MAPPER.map(reactions.get(0))).isEqualTo(one.get(0));
+        for (MappingResult r : one) {
+            assertThat(r.bondEdits().stream().mapToInt(BondEdit::weight).sum()).as("%s", r)
+                    .isEqualTo(Math.max(0, r.cost()));
+        }
     }
 
     @Test

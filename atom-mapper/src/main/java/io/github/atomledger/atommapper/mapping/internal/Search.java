@@ -44,6 +44,7 @@ public final class Search {
     private final boolean[] orbitRep;
     private final int[] sameMolecule;
     private final Ordering ordering;
+    private final LocalSearch polish;
     private final long deadline;
     private final long nodeLimit;
 
@@ -73,6 +74,7 @@ public final class Search {
         this.deadline = deadlineNanos;
         this.nodeLimit = options.nodeLimit();
         this.bounds = new Bounds(r, p, options);
+        this.polish = new LocalSearch(r, p, options, pin);
         this.map = new int[r.n];
         this.inv = new int[p.n];
         Arrays.fill(map, -1);
@@ -297,8 +299,8 @@ public final class Search {
             completed = true;
             completedMap = map.clone();
         } else if (g < upper) {
-            upper = g;
             best = map.clone();
+            upper = polish.improve(best, g);
         }
     }
 
