@@ -84,15 +84,20 @@ public final class AtomMapper {
                     List.of(), List.of(), "", difference, "heavy atoms do not balance (products minus reactants: "
                     + text + ")", elapsed(start));
         }
+        int heavy = 0;
+        for (Participant part : reaction.reactants()) {
+            heavy += part.structure().heavyAtomCount() * part.coefficient();
+        }
+        // Checked before any graph is built: the side graphs keep an n-by-n bond table.
+        if (heavy > options.maxHeavyAtoms()) {
+            return new MappingResult(id, MappingStatus.TOO_LARGE, List.of(), List.of(), -1, -1, List.of(), List.of(),
+                    List.of(), "", new TreeMap<>(), "each side has " + heavy
+                    + " heavy atoms, more than the cap of " + options.maxHeavyAtoms(), elapsed(start));
+        }
         Map<String, Integer> elementIds = new HashMap<>();
         Map<String, Integer> orbitIds = new HashMap<>();
         SideGraph r = new SideGraph(reaction.reactants(), elementIds, orbitIds);
         SideGraph p = new SideGraph(reaction.products(), elementIds, orbitIds);
-        if (r.atomCount() > options.maxHeavyAtoms()) {
-            return new MappingResult(id, MappingStatus.TOO_LARGE, List.of(), List.of(), -1, -1, List.of(), List.of(),
-                    List.of(), "", new TreeMap<>(), "each side has " + r.atomCount()
-                    + " heavy atoms, more than the cap of " + options.maxHeavyAtoms(), elapsed(start));
-        }
         int[] pin = new int[r.atomCount()];
         Arrays.fill(pin, -1);
         String pinProblem = resolvePins(r, p, pins, pin);
