@@ -184,7 +184,7 @@ public final class Search {
             stop = true;
         }
         if (stop) {
-            openMin = Math.min(openMin, g + bounds.bound(map, inv, order, depth));
+            openMin = Math.min(openMin, g + bounds.bound(map, inv));
             return;
         }
         if (depth == r.n) {
@@ -213,7 +213,7 @@ public final class Search {
                 break;
             }
             assign(u, x);
-            int lb = g + delta + bounds.bound(map, inv, order, depth + 1);
+            int lb = g + delta + bounds.bound(map, inv);
             if (!cut(lb)) {
                 dfs(depth + 1, g + delta);
             }
