@@ -1,6 +1,7 @@
 package io.github.atomledger.atommapper.mapping;
 
 import io.github.atomledger.atommapper.mapping.internal.Search;
+import io.github.atomledger.atommapper.mapping.internal.SearchClock;
 import io.github.atomledger.atommapper.mapping.internal.SideGraph;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -105,7 +106,7 @@ public final class AtomMapper {
             return new MappingResult(id, MappingStatus.UNMAPPABLE, List.of(), List.of(), -1, -1, List.of(), List.of(),
                     List.of(), "", new TreeMap<>(), pinProblem, elapsed(start));
         }
-        Search search = new Search(r, p, options, pin, start + options.timeBudget().toNanos());
+        Search search = new Search(r, p, options, pin, SearchClock.now() + options.timeBudget().toNanos());
         boolean proven = search.optimise();
         int[] best = search.best();
         int lower = search.lowerBound();

@@ -11,7 +11,8 @@ import java.util.Objects;
  * {@code otherBondWeight}; changing the order of a kept bond costs {@code orderChangeWeight}.
  * Defaults 2, 1, 1.
  *
- * @param timeBudget wall-clock budget per reaction (positive); when reached the result is
+ * @param timeBudget computing budget per reaction (positive), counted in CPU time of the mapping
+ *     thread where the JVM supports it (wall time otherwise); when reached the result is
  *     {@link MappingStatus#BEST_FOUND}
  * @param maxHeavyAtoms cap on heavy atoms per reaction side (copies counted, at most 20000); above it the result is
  *     {@link MappingStatus#TOO_LARGE}

@@ -66,7 +66,10 @@ public final class Search {
     private final Set<String> seenCarbon = new HashSet<>();
     private final Map<String, int[]> carbonMaps = new LinkedHashMap<>();
 
-    /** Prepares a search; {@code pin[u]} is the forced image of reactant atom u or -1. */
+    /**
+     * Prepares a search; {@code pin[u]} is the forced image of reactant atom u or -1. The time
+     * budget is counted in CPU time of the calling thread (see {@link SearchClock}).
+     */
     public Search(SideGraph r, SideGraph p, MappingOptions options, int[] pin, long deadlineNanos) {
         this.r = r;
         this.p = p;
@@ -180,7 +183,7 @@ public final class Search {
 
     private void dfs(int depth, int g) {
         nodes++;
-        if ((nodes & 255) == 0 && (best != null || enumerate) && (nodes > nodeLimit || System.nanoTime() > deadline)) {
+        if ((nodes & 255) == 0 && (best != null || enumerate) && (nodes > nodeLimit || SearchClock.now() > deadline)) {
             stop = true;
         }
         if (stop) {
