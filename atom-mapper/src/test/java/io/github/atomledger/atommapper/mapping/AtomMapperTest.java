@@ -83,6 +83,17 @@ class AtomMapperTest {
     }
 
     @Test
+    void honoursPinsOnSymmetricAtoms() {
+        // Succinate's carboxyl carbons are exchanged by symmetry; pinning either end must work.
+        ReactionInput reaction = FIXTURES.reaction("SDH", "succ -> fum");
+        for (String pin : List.of("succ 2>fum 2", "succ 2>fum 6")) {
+            MappingResult pinned = MAPPER.map(reaction, Reactions.carbons(pin));
+            assertThat(pinned.carbonTransitions()).as(pin).contains(Reactions.carbons(pin).get(0));
+            assertThat(pinned.cost()).isEqualTo(MAPPER.map(reaction).cost());
+        }
+    }
+
+    @Test
     void rejectsInfeasiblePins() {
         ReactionInput reaction = FIXTURES.reaction("TPI", "dhap -> g3p");
         assertThat(MAPPER.map(reaction, List.of(new AtomTransition(new AtomRef("dhap", 1, 1), new AtomRef("g3p", 1, 2), "C"))).reason())

@@ -39,6 +39,7 @@ public final class Search {
     private final int carbonDone;
     private final int[] pin;
     private final boolean[] pinnedP;
+    private final boolean pinned;
     private final int[][] candidatesByElement;
     private final int[] twinRep;
     private final boolean[] orbitRep;
@@ -83,11 +84,14 @@ public final class Search {
         Arrays.fill(map, -1);
         Arrays.fill(inv, -1);
         pinnedP = new boolean[p.n];
+        boolean any = false;
         for (int x : pin) {
             if (x >= 0) {
                 pinnedP[x] = true;
+                any = true;
             }
         }
+        pinned = any;
         int elements = 0;
         for (int e : r.elementId) {
             elements = Math.max(elements, e + 1);
@@ -241,6 +245,10 @@ public final class Search {
     }
 
     private boolean symmetric(int x) {
+        // Pins single out atoms, so the product's symmetries are no longer symmetries of the problem.
+        if (pinned) {
+            return false;
+        }
         int twin = twinRep[x];
         if (twin != x && inv[twin] < 0) {
             return true;
