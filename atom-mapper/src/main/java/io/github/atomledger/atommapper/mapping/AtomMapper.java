@@ -111,6 +111,11 @@ public final class AtomMapper {
         int[] best = search.best();
         int lower = search.lowerBound();
         ResultWriter writer = new ResultWriter(r, p, options);
+        if (best == null) {
+            return new MappingResult(id, MappingStatus.BEST_FOUND, List.of(), List.of(), -1, lower, List.of(),
+                    List.of(), List.of(), "", new TreeMap<>(), "the budget ran out before any complete map was found",
+                    elapsed(start));
+        }
         if (!proven) {
             return writer.result(id, MappingStatus.BEST_FOUND, best, search.upper(), lower, List.of(),
                     "the time or node budget ran out before the optimum was proven (best " + search.upper()
