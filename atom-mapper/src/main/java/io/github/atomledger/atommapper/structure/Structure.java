@@ -206,6 +206,14 @@ public final class Structure {
         String m = String.valueOf(e.getMessage()).strip();
         int nl = m.indexOf('\n');
         String line = nl < 0 ? m : m.substring(0, nl).strip();
+        // CDK repeats the input ("could not parse 'C1CC', ..."); the caller quotes it already.
+        if (line.startsWith("could not parse '")) {
+            int comma = line.indexOf("', ");
+            line = comma < 0 ? line : line.substring(comma + 3);
+        }
+        while (line.endsWith(":") || line.endsWith(".")) {
+            line = line.substring(0, line.length() - 1).strip();
+        }
         return line.isEmpty() ? line : Character.toLowerCase(line.charAt(0)) + line.substring(1);
     }
 

@@ -28,16 +28,15 @@ import org.openscience.cdk.smiles.SmilesGenerator;
 public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCodes, int[] orbits,
                            int[] hydrogens, int[] heavyToAtom, String canonicalSmiles) {
 
-    /** Aromaticity as in Daylight SMILES; cycles up to size 6 keep large ring systems cheap. */
-    private static final Aromaticity AROMATICITY = new Aromaticity(ElectronDonation.daylight(),
-            Cycles.or(Cycles.all(), Cycles.all(6)));
 
     /** Builds the arrays from {@code parsed}; {@code source} only names the input in errors. */
     public static GraphBuilder build(IAtomContainer parsed, String source) throws StructureException {
         IAtomContainer mol;
         try {
             mol = parsed.clone();
-            AROMATICITY.apply(mol);
+            // Aromaticity as in Daylight SMILES; made per call so that no CDK object is shared
+            // between threads. Cycles up to size 6 are the fallback for large ring systems.
+            new Aromaticity(ElectronDonation.daylight(), Cycles.or(Cycles.all(), Cycles.all(6))).apply(mol);
         } catch (CloneNotSupportedException | CDKException e) {
             throw new StructureException("cannot perceive aromaticity in '" + source + "': "
                     + e.getMessage(), e);
