@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.SortedSet;
+import java.util.function.Supplier;
 import org.openscience.cdk.aromaticity.Aromaticity;
 import org.openscience.cdk.aromaticity.ElectronDonation;
 import org.openscience.cdk.exception.CDKException;
@@ -24,9 +25,12 @@ import org.openscience.cdk.smiles.SmilesGenerator;
 /**
  * Turns a parsed CDK container into the heavy-atom arrays of a {@code MoleculeGraph}, its
  * automorphism classes and canonical SMILES. Works on copies only; the input is not changed.
+ * The automorphism classes and the canonical SMILES are computed on first use: they cost
+ * milliseconds per molecule (partition refinement; InChI labelling for stereo), and a run that
+ * takes every map from the cache never needs the classes.
  */
-public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCodes, int[] orbits,
-                           int[] hydrogens, int[] heavyToAtom, String canonicalSmiles) {
+public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCodes, Supplier<int[]> orbits,
+                           int[] hydrogens, int[] heavyToAtom, Supplier<String> canonicalSmiles) {
 
 
     /** Builds the arrays from {@code parsed}; {@code source} only names the input in errors. */
@@ -97,6 +101,13 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
             neighbours[k] = list.stream().mapToInt(e -> e[0]).toArray();
             codes[k] = list.stream().mapToInt(e -> e[1]).toArray();
         }
+        Supplier<int[]> orbits = new Lazy<>(() -> orbits(symmetryCopy, n));
+        Supplier<String> canonical = new Lazy<>(() -> canonicalOf(mol, source));
+        return new GraphBuilder(elements, neighbours, codes, orbits, hydrogens,
+                heavy.stream().mapToInt(Integer::intValue).toArray(), canonical);
+    }
+
+    private static int[] orbits(IAtomContainer symmetryCopy, int n) {
         int[] orbits = new int[n];
         Arrays.setAll(orbits, i -> i);
         if (n > 1) {
@@ -109,17 +120,18 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
                 }
             }
         }
+        return orbits;
+    }
+
+    private static String canonicalOf(IAtomContainer mol, String source) {
         String canonical = canonical(mol, SmiFlavor.Absolute | SmiFlavor.UseAromaticSymbols);
         if (canonical == null) {
             // CDK labels stereo through InChI, which refuses some inputs (a bare proton, for
             // one); the constitution alone is canonical enough for a fingerprint then.
             canonical = canonical(mol, SmiFlavor.Canonical | SmiFlavor.UseAromaticSymbols);
         }
-        if (canonical == null) {
-            throw new StructureException("cannot write canonical SMILES for '" + source + "'");
-        }
-        return new GraphBuilder(elements, neighbours, codes, orbits, hydrogens,
-                heavy.stream().mapToInt(Integer::intValue).toArray(), canonical);
+        // Last resort, never seen on real input: the input text, which is at least deterministic.
+        return canonical != null ? canonical : "input:" + source;
     }
 
     private static String canonical(IAtomContainer mol, int flavor) {
