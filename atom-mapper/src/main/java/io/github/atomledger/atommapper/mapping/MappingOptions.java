@@ -46,7 +46,7 @@ public record MappingOptions(Duration timeBudget, int maxHeavyAtoms, long nodeLi
 
     /** 2 s per reaction, 400 heavy atoms per side, no node cap, weights 2/1/1, 8 alternatives. */
     public static MappingOptions defaults() {
-        return new MappingOptions(Duration.ofSeconds(2), 400, Long.MAX_VALUE, 2, 1, 1, 8);
+        return new MappingOptions(Duration.ofSeconds(2), 400, Long.MAX_VALUE, 3, 1, 1, 8);
     }
 
     /** These options with another time budget. */
