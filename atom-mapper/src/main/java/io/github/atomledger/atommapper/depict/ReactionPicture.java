@@ -59,19 +59,50 @@ public final class ReactionPicture {
     /** Titles and indices: near-black, readable on white whatever the colour vision. */
     private static final Color TEXT = new Color(0x33, 0x33, 0x33);
 
-    private final ReactionInput input;
-    private final MappingResult result;
+    private final String reactionId;
+    private final String mappedSmiles;
+    private final String status;
+    private final List<String> left;
+    private final List<String> right;
     private Map<String, String> titles = Map.of();
     private boolean atomIndices;
 
-    private ReactionPicture(ReactionInput input, MappingResult result) {
-        this.input = Objects.requireNonNull(input, "input");
-        this.result = Objects.requireNonNull(result, "result");
+    private ReactionPicture(String reactionId, String mappedSmiles, String status, List<String> left,
+                            List<String> right) {
+        this.reactionId = Objects.requireNonNull(reactionId, "reactionId");
+        this.mappedSmiles = Objects.requireNonNull(mappedSmiles, "mappedSmiles");
+        this.status = status;
+        this.left = List.copyOf(left);
+        this.right = List.copyOf(right);
     }
 
     /** A picture of this mapping of this reaction (the same input the mapper was given). */
     public static ReactionPicture of(ReactionInput input, MappingResult result) {
-        return new ReactionPicture(input, result);
+        Objects.requireNonNull(input, "input");
+        return new ReactionPicture(result.reactionId(), result.mappedSmiles(), result.status().label(),
+                expand(input.reactants()), expand(input.products()));
+    }
+
+    /**
+     * A picture from a mapped reaction SMILES as {@link MappingResult#mappedSmiles()} writes it.
+     *
+     * @param reactants the species id of each reactant molecule of the SMILES, in order (copies
+     *                  repeated); used for titles only, ignored when the count does not match
+     * @param products  the same for the products
+     */
+    public static ReactionPicture of(String reactionId, String mappedSmiles, List<String> reactants,
+                                     List<String> products) {
+        return new ReactionPicture(reactionId, mappedSmiles, "no map", reactants, products);
+    }
+
+    private static List<String> expand(List<Participant> side) {
+        List<String> out = new ArrayList<>();
+        for (Participant p : side) {
+            for (int k = 0; k < p.coefficient(); k++) {
+                out.add(p.species());
+            }
+        }
+        return out;
     }
 
     /** Titles under the molecules, by species id (a missing id shows the id itself). */
@@ -91,6 +122,11 @@ public final class ReactionPicture {
         return !result.mappedSmiles().isEmpty();
     }
 
+    /** True when this picture has a map to draw. */
+    public boolean drawable() {
+        return !mappedSmiles.isEmpty();
+    }
+
     /**
      * The SVG document (UTF-8 text, sizes in px).
      *
@@ -98,19 +134,18 @@ public final class ReactionPicture {
      * @throws IllegalStateException    when CDK cannot read the mapped SMILES or draw it
      */
     public String svg() {
-        if (!drawable(result)) {
-            throw new IllegalArgumentException("reaction " + result.reactionId() + " has no atom map to draw ("
-                    + result.status().label() + ")");
+        if (!drawable()) {
+            throw new IllegalArgumentException("reaction " + reactionId + " has no atom map to draw (" + status + ")");
         }
         IReaction rxn;
         try {
-            rxn = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseReactionSmiles(result.mappedSmiles());
+            rxn = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseReactionSmiles(mappedSmiles);
         } catch (CDKException e) {
-            throw new IllegalStateException("cannot read the mapped SMILES of " + result.reactionId() + ": "
+            throw new IllegalStateException("cannot read the mapped SMILES of " + reactionId + ": "
                     + e.getMessage(), e);
         }
-        setTitles(rxn.getReactants(), input.reactants());
-        setTitles(rxn.getProducts(), input.products());
+        setTitles(rxn.getReactants(), left);
+        setTitles(rxn.getProducts(), right);
 
         TreeSet<Integer> reactantCarbons = new TreeSet<>();
         for (IAtomContainer mol : rxn.getReactants().atomContainers()) {
@@ -145,7 +180,7 @@ public final class ReactionPicture {
         try {
             return gen.depict(rxn).toSvgStr(Depiction.UNITS_PX);
         } catch (CDKException e) {
-            throw new IllegalStateException("cannot draw " + result.reactionId() + ": " + e.getMessage(), e);
+            throw new IllegalStateException("cannot draw " + reactionId + ": " + e.getMessage(), e);
         }
     }
 
@@ -171,13 +206,8 @@ public final class ReactionPicture {
     }
 
     /** One title per molecule, copies expanded, when the SMILES has one molecule per copy. */
-    private void setTitles(org.openscience.cdk.interfaces.IAtomContainerSet mols, List<Participant> side) {
-        List<String> names = new ArrayList<>();
-        for (Participant p : side) {
-            for (int k = 0; k < p.coefficient(); k++) {
-                names.add(titles.getOrDefault(p.species(), p.species()));
-            }
-        }
+    private void setTitles(org.openscience.cdk.interfaces.IAtomContainerSet mols, List<String> species) {
+        List<String> names = species.stream().map(id -> titles.getOrDefault(id, id)).toList();
         if (names.size() != mols.getAtomContainerCount()) {
             return;
         }

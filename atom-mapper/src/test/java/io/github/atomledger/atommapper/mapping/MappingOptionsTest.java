@@ -10,14 +10,14 @@ import org.junit.jupiter.api.Test;
 class MappingOptionsTest {
 
     @Test
-    void defaultsToTwoSecondsAndWeightsTwoOneOne() {
+    void defaultsToTwoSecondsAndWeightsThreeOneOne() {
         MappingOptions o = MappingOptions.defaults();
         assertThat(o.timeBudget()).isEqualTo(Duration.ofSeconds(2));
-        assertThat(o.bondWeight("C", "C")).isEqualTo(2);
+        assertThat(o.bondWeight("C", "C")).isEqualTo(3);
         assertThat(o.bondWeight("C", "O")).isEqualTo(1);
         assertThat(o.bondWeight("P", "O")).isEqualTo(1);
         assertThat(o.orderChangeWeight()).isEqualTo(1);
-        assertThat(o.fingerprint()).isEqualTo("t=PT2S;max=400;nodes=max;w=2/1/1;alt=8");
+        assertThat(o.fingerprint()).isEqualTo("t=PT2S;max=400;nodes=max;w=3/1/1;alt=8");
     }
 
     @Test
@@ -26,8 +26,8 @@ class MappingOptionsTest {
         assertThat(o.withNodeLimit(1000).fingerprint()).isNotEqualTo(o.fingerprint()).contains("nodes=1000");
         assertThat(o.withMaxHeavyAtoms(50).fingerprint()).contains("max=50");
         assertThat(o.withTimeBudget(Duration.ofMillis(500)).fingerprint()).contains("t=PT0.5S");
-        assertThat(new MappingOptions(Duration.ofSeconds(2), 400, Long.MAX_VALUE, 3, 1, 1, 8).fingerprint())
-                .contains("w=3/1/1");
+        assertThat(new MappingOptions(Duration.ofSeconds(2), 400, Long.MAX_VALUE, 4, 1, 1, 8).fingerprint())
+                .contains("w=4/1/1");
     }
 
     @Test

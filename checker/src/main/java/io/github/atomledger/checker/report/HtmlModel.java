@@ -15,11 +15,11 @@ final class HtmlModel {
 
     private final XmlOut x;
     private final ModelResult m;
-    private final Map<String, ReactionMapping> maps;
+    private final Map<String, MapPicture> maps;
     private final String idPrefix;
     private final int[] pictureBudget;
 
-    HtmlModel(XmlOut x, ModelResult m, Map<String, ReactionMapping> maps, String idPrefix, int[] pictureBudget) {
+    HtmlModel(XmlOut x, ModelResult m, Map<String, MapPicture> maps, String idPrefix, int[] pictureBudget) {
         this.pictureBudget = pictureBudget;
         this.x = x;
         this.m = m;
@@ -40,7 +40,7 @@ final class HtmlModel {
         modelFindings();
         Map<String, SpeciesChemistry> chemistry = BalanceTable.chemistry(m.model());
         for (ReactionResult r : m.reactions()) {
-            ReactionMapping map = maps.get(r.id());
+            MapPicture map = maps.get(r.id());
             boolean drawn = map != null && !map.svg().isEmpty() && pictureBudget[0] > 0;
             if (drawn) {
                 pictureBudget[0]--;

@@ -21,12 +21,12 @@ final class HtmlReaction {
     private final XmlOut x;
     private final ModelResult m;
     private final ReactionResult r;
-    private final ReactionMapping map;
+    private final MapPicture map;
     private final Map<String, SpeciesChemistry> chemistry;
     private final String idPrefix;
     private final boolean pictureAllowed;
 
-    HtmlReaction(XmlOut x, ModelResult m, ReactionResult r, ReactionMapping map,
+    HtmlReaction(XmlOut x, ModelResult m, ReactionResult r, MapPicture map,
                  Map<String, SpeciesChemistry> chemistry, String idPrefix, boolean pictureAllowed) {
         this.pictureAllowed = pictureAllowed;
         this.x = x;

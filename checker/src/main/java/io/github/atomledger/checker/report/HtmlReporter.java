@@ -40,7 +40,7 @@ public final class HtmlReporter implements Reporter {
     private final MappingSource mappings;
 
     public HtmlReporter() {
-        this(MappingSource.NONE);
+        this(MappingSource.FROM_ENGINE);
     }
 
     /** A reporter that draws the atom maps this source provides. */
@@ -63,15 +63,15 @@ public final class HtmlReporter implements Reporter {
     /** The page, exactly the bytes {@link #write} puts in the file. */
     public String toHtml(RunResult result) {
         try {
-            Map<ModelResult, Map<String, ReactionMapping>> maps = new LinkedHashMap<>();
+            Map<ModelResult, Map<String, MapPicture>> maps = new LinkedHashMap<>();
             TreeSet<String> rules = new TreeSet<>();
             TreeSet<String> statuses = new TreeSet<>();
             for (ModelResult m : result.models()) {
-                Map<String, ReactionMapping> mm = new LinkedHashMap<>();
+                Map<String, MapPicture> mm = new LinkedHashMap<>();
                 for (ReactionResult r : m.reactions()) {
-                    Optional<ReactionMapping> rm = mappings.mapping(m, r);
+                    Optional<MapPicture> rm = mappings.mapping(m, r);
                     rm.ifPresent(x -> mm.put(r.id(), x));
-                    statuses.add(rm.map(ReactionMapping::status).orElse(NO_MAP));
+                    statuses.add(rm.map(MapPicture::status).orElse(NO_MAP));
                 }
                 maps.put(m, mm);
                 m.allFindings().forEach(f -> rules.add(f.ruleId()));

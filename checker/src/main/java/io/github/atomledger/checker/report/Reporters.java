@@ -18,7 +18,7 @@ public final class Reporters {
 
     static {
         ALL.put(ReportFormat.JSON, JsonReporter::new);
-        ALL.put(ReportFormat.HTML, HtmlReporter::new);
+        ALL.put(ReportFormat.HTML, () -> new HtmlReporter(MappingSource.FROM_ENGINE));
         ALL.put(ReportFormat.JUNIT, JunitReporter::new);
         ALL.put(ReportFormat.SARIF, SarifReporter::new);
         ALL.put(ReportFormat.MARKDOWN, MarkdownReporter::new);
@@ -36,7 +36,7 @@ public final class Reporters {
      * @throws IllegalArgumentException for a format this build cannot write yet
      */
     public static Reporters forFormats(Set<ReportFormat> formats) {
-        return forFormats(formats, MappingSource.NONE);
+        return forFormats(formats, MappingSource.FROM_ENGINE);
     }
 
     /**

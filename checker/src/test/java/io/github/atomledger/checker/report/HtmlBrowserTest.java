@@ -33,8 +33,7 @@ class HtmlBrowserTest {
         chromium = findChromium();
         assumeTrue(chromium != null, "chromium is not installed (Debian package 'chromium'); skipping the browser test");
         Files.createDirectories(OUT);
-        var result = DemoReports.run(OUT);
-        new HtmlReporter(new StructureTableMappings(DemoReports.DEMO.resolve("structures.tsv"))).write(result, OUT);
+        new HtmlReporter().write(DemoReports.runMapped(), OUT);
         page = OUT.resolve("report.html").toAbsolutePath();
     }
 

@@ -18,14 +18,12 @@ class HtmlReporterTest {
 
     static final Path OUT = Path.of("target", "reports-demo");
     static RunResult result;
-    static StructureTableMappings mappings;
     static String html;
 
     @BeforeAll
     static void writeDemoReport() throws Exception {
-        result = DemoReports.run(OUT);
-        mappings = new StructureTableMappings(DemoReports.DEMO.resolve("structures.tsv"));
-        DemoReports.writeAll(result, OUT, mappings);
+        result = DemoReports.runMapped();
+        DemoReports.writeAll(result, OUT, MappingSource.FROM_ENGINE);
         html = Files.readString(OUT.resolve("report.html"));
     }
 
@@ -59,13 +57,15 @@ class HtmlReporterTest {
     }
 
     @Test
-    void drawsAtomMapsForTheMappedReactionsAndKeepsOthersBalanceOnly() {
-        assertThat(mappings.mapped).isGreaterThan(20);
+    void drawsTheEnginesAtomMapsAndSaysWhyOthersHaveNone() {
+        long withMap = result.models().get(0).reactions().stream().filter(r -> r.mapping() != null
+                && r.mapping().hasMap()).count();
+        assertThat(withMap).isGreaterThan(20);
         assertThat(html).contains("id=\"m0-R_FBA\"");
         int svgs = html.split("<svg", -1).length - 1;
-        assertThat(svgs).as("one picture per drawable map").isGreaterThanOrEqualTo(20);
+        assertThat((long) svgs).as("one picture per map").isEqualTo(withMap);
         assertThat(html).contains("class=\"annotation\"").contains("id=\"show-idx\"");
-        assertThat(html).contains("No atom map for this reaction: balance only.");
+        assertThat(html).as("exchange reactions are not mapped").contains("Not attempted: ");
     }
 
     @Test
@@ -75,8 +75,15 @@ class HtmlReporterTest {
     }
 
     @Test
+    void mappedReportIsByteStableAndMatchesTheJsonSchema() throws Exception {
+        assertThat(new HtmlReporter().toHtml(result)).isEqualTo(html);
+        assertThat(JsonSchemas.errors(JsonSchemas.report(), new JsonReporter().toJson(result))).isEmpty();
+        assertThat(JsonSchemas.errors(JsonSchemas.sarif(), new SarifReporter().toSarif(result))).isEmpty();
+    }
+
+    @Test
     void rendersWithoutMappingData() throws Exception {
-        String plain = new HtmlReporter().toHtml(result);
+        String plain = new HtmlReporter(MappingSource.NONE).toHtml(result);
         parse(plain);
         assertThat(plain).doesNotContain("<svg").contains("No atom map for this reaction: balance only.");
     }

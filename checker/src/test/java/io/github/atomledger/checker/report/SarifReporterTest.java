@@ -70,7 +70,7 @@ class SarifReporterTest {
         ModelResult m = demo.models().get(0);
         Finding noLine = new Finding("model.formula-missing", Severity.INFO, "models/with space.xml", "glc_c", 0,
                 "Species glc_c has no formula.", new TreeMap<>());
-        RunResult result = new RunResult(demo.config(), List.of(new ModelResult(m.model(), List.of(), List.of(noLine))));
+        RunResult result = new RunResult(demo.config(), List.of(new ModelResult(m.model(), List.of(), List.of(noLine), m.mapping())));
         String sarif = new SarifReporter().toSarif(result);
         assertThat(JsonSchemas.errors(JsonSchemas.sarif(), sarif)).isEmpty();
         JsonNode r = MAPPER.readTree(sarif).path("runs").path(0).path("results").path(0);

@@ -1,0 +1,125 @@
+package io.github.atomledger.checker.report;
+
+import io.github.atomledger.atommapper.depict.ReactionPicture;
+import io.github.atomledger.atommapper.mapping.MappingResult;
+import io.github.atomledger.atommapper.mapping.MappingStatus;
+import io.github.atomledger.atommapper.mapping.ReactionInput;
+
+import io.github.atomledger.atommapper.formula.Rational;
+import io.github.atomledger.checker.check.mapping.ReactionMapping;
+import io.github.atomledger.checker.engine.ModelResult;
+import io.github.atomledger.checker.engine.ReactionResult;
+import io.github.atomledger.checker.model.Participant;
+import io.github.atomledger.checker.model.SpeciesInfo;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * Turns an atom map (the engine's, or an atom-mapper result) into what the HTML report shows ({@link MapPicture}): the
+ * status, a one-sentence summary, the notes, and the drawing with atom indices (the report hides them
+ * until asked)
+ * (drawn by atom-mapper's {@link ReactionPicture}; checker itself never touches CDK).
+ */
+public final class MapPictures {
+
+    private MapPictures() {
+    }
+
+    /**
+     * The report view of one mapping.
+     *
+     * @param input  the reaction as given to the mapper
+     * @param result the mapper's result for it
+     * @param titles molecule titles by species id (usually the species names)
+     */
+    public static MapPicture of(ReactionInput input, MappingResult result, Map<String, String> titles) {
+        String svg = ReactionPicture.drawable(result)
+                ? ReactionPicture.of(input, result).titles(titles).atomIndices(true).svg() : "";
+        List<String> notes = new ArrayList<>(result.stereoNotes());
+        if (result.status() == MappingStatus.AMBIGUOUS && !result.alternatives().isEmpty()) {
+            notes.add(result.alternatives().size() + " other co-optimal carbon map(s) exist; the drawing shows one.");
+        }
+        return new MapPicture(result.status().label(), summary(result), svg, notes);
+    }
+
+    /**
+     * The view of the map the engine computed for this reaction ({@link ReactionResult#mapping()}),
+     * or empty when mapping did not run for it. Molecule titles are the species names.
+     */
+    public static Optional<MapPicture> fromEngine(ModelResult model, ReactionResult reaction) {
+        ReactionMapping m = reaction.mapping();
+        if (m == null) {
+            return Optional.empty();
+        }
+        String svg = "";
+        if (m.hasMap() && !m.mappedSmiles().isEmpty()) {
+            Map<String, String> titles = new HashMap<>();
+            for (SpeciesInfo s : model.model().species()) {
+                titles.put(s.id(), s.name());
+            }
+            svg = ReactionPicture.of(m.reactionId(), m.mappedSmiles(), molecules(reaction.reaction().reactants()),
+                    molecules(reaction.reaction().products())).titles(titles).atomIndices(true).svg();
+        }
+        List<String> notes = new ArrayList<>(m.stereoNotes());
+        if (!m.alternatives().isEmpty()) {
+            notes.add(m.alternatives().size() + " other co-optimal carbon map(s) exist; the drawing shows one.");
+        }
+        return Optional.of(new MapPicture(m.status().label(), summary(m), svg, notes));
+    }
+
+    /** One entry per molecule the engine gave the mapper: species in document order, merged, copies repeated. */
+    private static List<String> molecules(List<Participant> side) {
+        Map<String, Integer> merged = new LinkedHashMap<>();
+        for (Participant p : side) {
+            int n = 1;
+            try {
+                Rational c = p.stoichiometryText() == null ? Rational.ONE : Rational.parse(p.stoichiometryText());
+                n = c.isInteger() && c.signum() > 0 && c.numerator().bitLength() < 16 ? c.numerator().intValue() : 1;
+            } catch (NumberFormatException | ArithmeticException e) {
+                n = 1;
+            }
+            merged.merge(p.species(), n, Integer::sum);
+        }
+        List<String> out = new ArrayList<>();
+        merged.forEach((species, n) -> {
+            for (int k = 0; k < n; k++) {
+                out.add(species);
+            }
+        });
+        return out;
+    }
+
+    static String summary(ReactionMapping m) {
+        String reason = m.reason().isEmpty() || m.reason().endsWith(".") ? m.reason() : m.reason() + ".";
+        int carbons = m.carbons().size();
+        return switch (m.status()) {
+            case MAPPED -> "Mapped: " + carbons + " carbon(s), " + m.cost() + " weighted bond edit(s), proven minimum.";
+            case AMBIGUOUS -> "Ambiguous: " + carbons + " carbon(s), " + m.cost()
+                    + " weighted bond edit(s), proven minimum, but co-optimal maps move some carbons elsewhere.";
+            case BEST_FOUND -> "Best found: " + carbons + " carbon(s), " + m.cost() + " weighted bond edit(s), lower bound "
+                    + m.lowerBound() + " (not proven optimal): " + reason;
+            case UNMAPPABLE -> "Not mappable: " + reason;
+            case NO_STRUCTURE -> "No structure: " + reason;
+            case SKIPPED -> "Not attempted: " + reason;
+        };
+    }
+
+    static String summary(MappingResult r) {
+        int carbons = r.carbonTransitions().size();
+        String reason = r.reason().isEmpty() || r.reason().endsWith(".") ? r.reason() : r.reason() + ".";
+        return switch (r.status()) {
+            case MAPPED -> "Mapped: " + carbons + " carbon(s), " + r.cost() + " weighted bond edit(s), proven minimum.";
+            case AMBIGUOUS -> "Ambiguous: " + carbons + " carbon(s), " + r.cost()
+                    + " weighted bond edit(s), proven minimum, but co-optimal maps move some carbons elsewhere.";
+            case BEST_FOUND -> "Best found: " + carbons + " carbon(s), " + r.cost() + " weighted bond edit(s), lower bound "
+                    + r.lowerBound() + " (not proven optimal): " + reason;
+            case UNMAPPABLE -> "Not mappable: " + reason;
+            case TOO_LARGE -> "Not attempted: " + reason;
+        };
+    }
+}
