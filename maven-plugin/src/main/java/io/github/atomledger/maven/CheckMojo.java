@@ -114,6 +114,41 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1073741824")
     private long maxModelBytes;
 
+    /**
+     * Species structure side table: a TSV file with a header and the columns {@code species} and
+     * {@code smiles} or {@code inchi}. Setting it turns atom mapping on (see {@code mapping}).
+     * Example: {@code -Datomledger.structures=structures.tsv}.
+     */
+    @Parameter(property = "atomledger.structures")
+    private File structures;
+
+    /**
+     * Atom mapping: {@code auto} (map when {@code structures} is set), {@code on} (also with
+     * InChIs from MIRIAM annotations or structures stored by {@code annotate}), or {@code off}.
+     * Default {@code auto}.
+     */
+    @Parameter(property = "atomledger.mapping", defaultValue = "auto")
+    private String mapping;
+
+    /** Mapping threads; 0 means one per core. Default 0. */
+    @Parameter(property = "atomledger.threads", defaultValue = "0")
+    private int threads;
+
+    /**
+     * Where mapping results are cached between runs (they survive {@code mvn clean}); {@code none}
+     * switches the cache off. Default {@code ~/.cache/atomledger/maps}.
+     */
+    @Parameter(property = "atomledger.cacheDirectory")
+    private String cacheDirectory;
+
+    /** Time budget per reaction for the exact mapper, in milliseconds. Default 2000. */
+    @Parameter(property = "atomledger.mappingTimeBudget", defaultValue = "2000")
+    private long mappingTimeBudget;
+
+    /** Size cap per molecule for the mapper, in heavy (non-hydrogen) atoms. Default 400. */
+    @Parameter(property = "atomledger.maxHeavyAtoms", defaultValue = "400")
+    private int maxHeavyAtoms;
+
     /** The project directory; model patterns are relative to it. */
     @Parameter(defaultValue = "${basedir}", readonly = true, required = true)
     private File baseDirectory;
@@ -126,7 +161,9 @@ public final class CheckMojo extends AbstractMojo {
         }
         RunConfig config = ConfigMapper.toConfig(baseDirectory, models,
                 ConfigMapper.reportDirectory(reportDirectory, buildDirectory, baseDirectory), failOnSeverity, formats,
-                severities, classSeverities, maxModelBytes);
+                severities, classSeverities, maxModelBytes)
+                .withMapping(ConfigMapper.mapping(mapping, baseDirectory, structures, threads, cacheDirectory,
+                        mappingTimeBudget, maxHeavyAtoms));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
         List<Path> written;

@@ -3,6 +3,8 @@ package io.github.atomledger.maven;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.check.StandardChecks;
+import io.github.atomledger.atommapper.mapping.MappingOptions;
+import io.github.atomledger.checker.engine.MappingConfig;
 import io.github.atomledger.checker.engine.RunConfig;
 import io.github.atomledger.checker.engine.RunResult;
 import io.github.atomledger.checker.engine.SeverityPolicy;
@@ -12,6 +14,7 @@ import io.github.atomledger.checker.gate.GateConfig;
 import io.github.atomledger.checker.report.ReportFormat;
 
 import java.io.File;
+import java.time.Duration;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
@@ -50,7 +53,7 @@ final class ConfigMapper {
             SeverityPolicy policy = SeverityPolicy.of(severities == null ? Map.of() : severities,
                     classSeverities == null ? Map.of() : classSeverities, knownRuleIds());
             return new RunConfig(base, patterns, reportDirectory.toPath().toAbsolutePath().normalize(),
-                    failOn(failOnSeverity), fmt, policy, maxModelBytes);
+                    failOn(failOnSeverity), fmt, policy, maxModelBytes, MappingConfig.OFF);
         } catch (IllegalArgumentException e) {
             throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
         }
@@ -77,6 +80,46 @@ final class ConfigMapper {
         } catch (IllegalArgumentException e) {
             throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * The mapping settings.
+     *
+     * @param mode       "auto" (map when a structure table is given), "on" or "off"
+     * @param structures the side table, or null
+     * @param threads    worker threads; 0 or less means one per core
+     * @param cache      the cache directory, or null for the default; "none" switches the cache off
+     * @param budgetMs   time budget per reaction in milliseconds
+     * @param maxHeavy   size cap per molecule in heavy atoms
+     */
+    static MappingConfig mapping(String mode, File baseDir, File structures, int threads, String cache, long budgetMs,
+                                 int maxHeavy) throws MojoExecutionException {
+        String m = mode == null ? "auto" : mode.strip().toLowerCase(Locale.ROOT);
+        if (!m.equals("auto") && !m.equals("on") && !m.equals("off")) {
+            throw new MojoExecutionException("AtomLedger configuration: mapping: unknown value '" + mode
+                    + "'; allowed: auto, on, off");
+        }
+        boolean enabled = m.equals("on") || (m.equals("auto") && structures != null);
+        if (structures != null && !structures.isFile()) {
+            throw new MojoExecutionException("AtomLedger configuration: structures: file not found: " + structures);
+        }
+        if (budgetMs <= 0 || maxHeavy <= 0) {
+            throw new MojoExecutionException("AtomLedger configuration: mappingTimeBudget and maxHeavyAtoms must be positive, were "
+                    + budgetMs + " and " + maxHeavy);
+        }
+        Path cacheDir;
+        if (cache == null || cache.isBlank()) {
+            cacheDir = MappingConfig.defaultCacheDirectory();
+        } else if (cache.strip().equalsIgnoreCase("none")) {
+            cacheDir = null;
+        } else {
+            Path p = Path.of(cache.strip());
+            cacheDir = p.isAbsolute() ? p : baseDir.toPath().resolve(p);
+        }
+        int n = threads > 0 ? threads : Runtime.getRuntime().availableProcessors();
+        MappingOptions options = MappingOptions.defaults().withTimeBudget(Duration.ofMillis(budgetMs)).withMaxHeavyAtoms(maxHeavy);
+        return new MappingConfig(enabled, structures == null ? null : structures.toPath().toAbsolutePath().normalize(),
+                options, n, cacheDir);
     }
 
     /**

@@ -62,6 +62,11 @@ public final class AnnotationIndex {
         return s == null ? Optional.empty() : Optional.ofNullable(s.stored());
     }
 
+    /** Reads a model file (plain or gzip, any declared encoding) and scans it. */
+    public static AnnotationIndex read(java.nio.file.Path file, String display, long maxBytes) {
+        return scan(ModelText.read(file, display, maxBytes).text(), display);
+    }
+
     /** Scans a model's text; {@code file} names it in error messages. */
     public static AnnotationIndex scan(String text, String file) {
         XMLInputFactory f = new WstxInputFactory();

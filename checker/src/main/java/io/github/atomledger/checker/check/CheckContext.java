@@ -2,6 +2,7 @@ package io.github.atomledger.checker.check;
 
 import io.github.atomledger.checker.check.balance.ReactionBalance;
 import io.github.atomledger.checker.check.balance.SpeciesChemistry;
+import io.github.atomledger.checker.check.mapping.MappingData;
 import io.github.atomledger.checker.model.ModelView;
 
 import java.util.Map;
@@ -17,12 +18,24 @@ public final class CheckContext {
     private final ModelView model;
     private final Map<String, SpeciesChemistry> chemistry;
     private final Map<String, ReactionBalance> balances;
+    private final MappingData mapping;
 
     public CheckContext(ModelView model, Map<String, SpeciesChemistry> chemistry,
                         Map<String, ReactionBalance> balances) {
+        this(model, chemistry, balances, MappingData.NONE);
+    }
+
+    public CheckContext(ModelView model, Map<String, SpeciesChemistry> chemistry,
+                        Map<String, ReactionBalance> balances, MappingData mapping) {
         this.model = Objects.requireNonNull(model, "model");
         this.chemistry = Map.copyOf(chemistry);
         this.balances = Map.copyOf(balances);
+        this.mapping = Objects.requireNonNull(mapping, "mapping");
+    }
+
+    /** Atom maps and structures; {@link MappingData#NONE} when mapping is off. */
+    public MappingData mapping() {
+        return mapping;
     }
 
     public ModelView model() {

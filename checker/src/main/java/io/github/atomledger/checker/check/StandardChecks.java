@@ -14,6 +14,13 @@ import io.github.atomledger.checker.check.integrity.DuplicateIdCheck;
 import io.github.atomledger.checker.check.integrity.ReactionShapeCheck;
 import io.github.atomledger.checker.check.integrity.ReferenceCheck;
 
+import io.github.atomledger.checker.check.mapping.CuratedMapCheck;
+import io.github.atomledger.checker.check.mapping.MappingStatusCheck;
+import io.github.atomledger.checker.check.mapping.StaleMapCheck;
+import io.github.atomledger.checker.check.mapping.StructureMissingCheck;
+import io.github.atomledger.checker.check.mapping.StructureSourceCheck;
+
+import java.util.ArrayList;
 import java.util.List;
 
 /** The registry: every check AtomLedger runs, listed explicitly. No classpath scanning. */
@@ -24,7 +31,7 @@ public final class StandardChecks {
 
     /** All checks in a fixed order; rule ids are unique. */
     public static List<ModelCheck> all() {
-        return List.of(
+        List<ModelCheck> all = new ArrayList<>(List.of(
                 new DuplicateIdCheck(),
                 new ReferenceCheck(),
                 new ReactionShapeCheck(),
@@ -38,6 +45,12 @@ public final class StandardChecks {
                 new NotComputableCheck(),
                 new PolymerFormulaCheck(),
                 new ExemptReactionCheck(),
-                new ClassMismatchCheck());
+                new ClassMismatchCheck()));
+        all.addAll(StructureSourceCheck.all());
+        all.add(new StructureMissingCheck());
+        all.addAll(MappingStatusCheck.all());
+        all.addAll(CuratedMapCheck.all());
+        all.add(new StaleMapCheck());
+        return List.copyOf(all);
     }
 }

@@ -9,6 +9,7 @@ import io.github.atomledger.checker.check.balance.BalanceCalculator;
 import io.github.atomledger.checker.check.balance.ReactionBalance;
 import io.github.atomledger.checker.check.balance.ReactionClass;
 import io.github.atomledger.checker.check.balance.SpeciesChemistry;
+import io.github.atomledger.checker.check.mapping.MappingData;
 import io.github.atomledger.checker.model.LoadOptions;
 import io.github.atomledger.checker.model.ModelLoader;
 import io.github.atomledger.checker.model.ModelView;
@@ -57,17 +58,29 @@ public final class Engine {
             String display = ModelLocator.relative(config.baseDirectory(), file);
             listener.debug("reading " + display);
             ModelView model = loader.load(file, display);
-            results.add(check(model, config.policy()));
+            results.add(check(model, file, config, listener));
         }
         return new RunResult(config, results);
     }
 
-    /** Checks one loaded model. */
+    /** Checks one loaded model without atom mapping. */
     public ModelResult check(ModelView model, SeverityPolicy policy) {
+        return check(model, null, policy, MappingConfig.OFF, RunListener.SILENT, null, 0);
+    }
+
+    private ModelResult check(ModelView model, Path file, RunConfig config, RunListener listener) {
+        return check(model, file, config.policy(), config.mapping(), listener, config.baseDirectory(), config.maxModelBytes());
+    }
+
+    private ModelResult check(ModelView model, Path file, SeverityPolicy policy, MappingConfig mappingConfig,
+                              RunListener listener, Path base, long maxBytes) {
         BalanceCalculator calculator = new BalanceCalculator();
         Map<String, SpeciesChemistry> chemistry = calculator.chemistry(model);
         Map<String, ReactionBalance> balances = calculator.balances(model, chemistry);
-        CheckContext context = new CheckContext(model, chemistry, balances);
+        MappingData mapping = mappingConfig.enabled() && file != null
+                ? new MappingStage(mappingConfig, base, maxBytes, listener).run(model, file, balances)
+                : MappingData.NONE;
+        CheckContext context = new CheckContext(model, chemistry, balances, mapping);
 
         Map<String, List<Finding>> byReaction = new HashMap<>();
         List<Finding> modelFindings = new ArrayList<>();
@@ -97,8 +110,9 @@ public final class Engine {
             if (!done.add(r.id())) {
                 continue;
             }
-            reactions.add(new ReactionResult(r, balances.get(r.id()), byReaction.getOrDefault(r.id(), List.of())));
+            reactions.add(new ReactionResult(r, balances.get(r.id()), byReaction.getOrDefault(r.id(), List.of()),
+                    mapping.mapping(r.id()).orElse(null)));
         }
-        return new ModelResult(model, reactions, modelFindings);
+        return new ModelResult(model, reactions, modelFindings, mapping);
     }
 }

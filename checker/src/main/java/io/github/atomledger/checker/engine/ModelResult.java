@@ -1,6 +1,7 @@
 package io.github.atomledger.checker.engine;
 
 import io.github.atomledger.checker.check.Finding;
+import io.github.atomledger.checker.check.mapping.MappingData;
 import io.github.atomledger.checker.model.ModelView;
 
 import java.util.List;
@@ -13,8 +14,10 @@ import java.util.stream.Stream;
  * @param model         the model as read
  * @param reactions     one result per reaction, in document order
  * @param modelFindings findings about species or the model itself (not a reaction), sorted
+ * @param mapping       atom maps and structures ({@link MappingData#NONE} when mapping was off)
  */
-public record ModelResult(ModelView model, List<ReactionResult> reactions, List<Finding> modelFindings) {
+public record ModelResult(ModelView model, List<ReactionResult> reactions, List<Finding> modelFindings,
+                          MappingData mapping) {
 
     public ModelResult {
         Objects.requireNonNull(model, "model");

@@ -3,6 +3,7 @@ package io.github.atomledger.checker.engine;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.balance.ReactionBalance;
 import io.github.atomledger.checker.check.balance.ReactionClass;
+import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.model.ReactionInfo;
 
 import java.util.List;
@@ -14,8 +15,10 @@ import java.util.Objects;
  * @param reaction the reaction as read
  * @param balance  its balance
  * @param findings findings whose element is this reaction, in {@link Finding#ORDER}
+ * @param mapping  its atom map, or null when mapping was not run
  */
-public record ReactionResult(ReactionInfo reaction, ReactionBalance balance, List<Finding> findings) {
+public record ReactionResult(ReactionInfo reaction, ReactionBalance balance, List<Finding> findings,
+                             ReactionMapping mapping) {
 
     public ReactionResult {
         Objects.requireNonNull(reaction, "reaction");

@@ -20,9 +20,11 @@ import java.util.Set;
  * @param formats         report formats to write
  * @param policy          severity overrides
  * @param maxModelBytes   the most bytes of XML read from one model file (after decompression)
+ * @param mapping         atom mapping settings ({@link MappingConfig#OFF} to skip mapping)
  */
 public record RunConfig(Path baseDirectory, List<String> models, Path reportDirectory, Severity failOn,
-                        Set<ReportFormat> formats, SeverityPolicy policy, long maxModelBytes) {
+                        Set<ReportFormat> formats, SeverityPolicy policy, long maxModelBytes,
+                        MappingConfig mapping) {
 
     /** The default model patterns: every .xml and .xml.gz file below {@code models/}. */
     public static final List<String> DEFAULT_MODELS = List.of("models/**.{xml,xml.gz}");
@@ -36,6 +38,7 @@ public record RunConfig(Path baseDirectory, List<String> models, Path reportDire
         }
         formats = Set.copyOf(formats);
         Objects.requireNonNull(policy, "policy");
+        Objects.requireNonNull(mapping, "mapping");
         if (maxModelBytes <= 0) {
             throw new IllegalArgumentException("maxModelBytes must be positive, was " + maxModelBytes);
         }
@@ -44,14 +47,18 @@ public record RunConfig(Path baseDirectory, List<String> models, Path reportDire
     /** A configuration with defaults for everything but the base directory and models. */
     public static RunConfig defaults(Path baseDirectory, List<String> models) {
         return new RunConfig(baseDirectory, models, baseDirectory.resolve("target/atomledger"), Severity.ERROR,
-                Set.of(ReportFormat.JSON), SeverityPolicy.defaults(), io.github.atomledger.checker.model.LoadOptions.DEFAULT_MAX_BYTES);
+                Set.of(ReportFormat.JSON), SeverityPolicy.defaults(), io.github.atomledger.checker.model.LoadOptions.DEFAULT_MAX_BYTES, MappingConfig.OFF);
     }
 
     public RunConfig withFormats(Set<ReportFormat> newFormats) {
-        return new RunConfig(baseDirectory, models, reportDirectory, failOn, newFormats, policy, maxModelBytes);
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, newFormats, policy, maxModelBytes, mapping);
     }
 
     public RunConfig withPolicy(SeverityPolicy newPolicy) {
-        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, newPolicy, maxModelBytes);
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, newPolicy, maxModelBytes, mapping);
+    }
+
+    public RunConfig withMapping(MappingConfig newMapping) {
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, policy, maxModelBytes, newMapping);
     }
 }

@@ -58,9 +58,12 @@ public final class Gate {
         this.carbons = carbons;
     }
 
-    /** A gate reading carbon transitions from the model files' annotations. */
+    /**
+     * A gate taking each reaction's carbon transitions from the model file's annotation (what the
+     * release ships), else from the atom map computed in the run, when mapping was on.
+     */
     public static Gate standard(Engine engine, long maxModelBytes) {
-        return new Gate(engine, new StoredTransitions(maxModelBytes));
+        return new Gate(engine, CarbonTransitions.firstOf(new StoredTransitions(maxModelBytes), CarbonTransitions.COMPUTED));
     }
 
     /** The gate's own rule ids (stale baseline entries and the release diff), sorted. */
@@ -161,10 +164,10 @@ public final class Gate {
                 } else {
                     List<Finding> all = new ArrayList<>(r.findings());
                     all.addAll(more);
-                    reactions.add(new ReactionResult(r.reaction(), r.balance(), all));
+                    reactions.add(new ReactionResult(r.reaction(), r.balance(), all, r.mapping()));
                 }
             }
-            models.add(new ModelResult(m.model(), reactions, modelLevel));
+            models.add(new ModelResult(m.model(), reactions, modelLevel, m.mapping()));
         }
         return new RunResult(run.config(), models, run.gate());
     }

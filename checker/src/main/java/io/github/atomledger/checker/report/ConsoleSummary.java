@@ -31,6 +31,10 @@ public final class ConsoleSummary {
         Severity threshold = result.config().failOn() == null ? Severity.ERROR : result.config().failOn();
         for (ModelResult m : result.models()) {
             out.add(modelLine(m));
+            if (m.mapping().enabled()) {
+                out.add("  " + mappingLine(m));
+                example(m).ifPresent(out::add);
+            }
             int shown = 0;
             int hidden = 0;
             for (ReactionResult r : m.reactions()) {
@@ -72,6 +76,40 @@ public final class ConsoleSummary {
                 + elements + " element-imbalanced, " + charge + " charge-imbalanced, " + unknown + " not computable; "
                 + count(all, Severity.ERROR) + " errors, " + count(all, Severity.WARNING) + " warnings, "
                 + count(all, Severity.INFO) + " info";
+    }
+
+    static String mappingLine(ModelResult m) {
+        Map<String, Integer> statuses = new TreeMap<>();
+        m.reactions().forEach(r -> {
+            if (r.mapping() != null) {
+                statuses.merge(r.mapping().status().label(), 1, Integer::sum);
+            }
+        });
+        StringBuilder sb = new StringBuilder("atom maps:");
+        statuses.forEach((k, v) -> sb.append(sb.length() > 10 ? ", " : " ").append(v).append(' ').append(k));
+        return sb.toString();
+    }
+
+    /**
+     * A short, telling example: the proven map with at least two substrate molecules feeding
+     * carbons and the fewest carbons (a carboxylation, say); first in document order on ties.
+     */
+    static java.util.Optional<String> example(ModelResult m) {
+        ReactionResult best = null;
+        for (ReactionResult r : m.reactions()) {
+            if (r.mapping() == null || r.mapping().status() != io.github.atomledger.checker.check.mapping.MapStatus.MAPPED) {
+                continue;
+            }
+            long sources = r.mapping().carbons().stream().map(t -> t.from().species() + "#" + t.from().copy()).distinct().count();
+            if (sources >= 2 && (best == null || r.mapping().carbons().size() < best.mapping().carbons().size())) {
+                best = r;
+            }
+        }
+        if (best == null) {
+            return java.util.Optional.empty();
+        }
+        return java.util.Optional.of("  example " + best.id() + " carbons: "
+                + String.join("; ", io.github.atomledger.checker.annotate.CarbonMapText.format(best.mapping().carbons())));
     }
 
     static String reactionLine(ReactionResult r, List<Finding> bad) {

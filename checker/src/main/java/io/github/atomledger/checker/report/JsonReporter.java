@@ -1,6 +1,9 @@
 package io.github.atomledger.checker.report;
 
 import io.github.atomledger.atommapper.formula.Rational;
+import io.github.atomledger.atommapper.mapping.AtomRef;
+import io.github.atomledger.atommapper.mapping.AtomTransition;
+import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.Version;
 import io.github.atomledger.checker.baseline.BaselineMatch;
 import io.github.atomledger.checker.check.Finding;
@@ -129,6 +132,17 @@ public final class JsonReporter implements Reporter {
         summary.put("elementImbalanced", m.reactions().stream().filter(r -> r.balance().elementImbalanced()).count());
         summary.put("chargeImbalanced", m.reactions().stream().filter(r -> r.balance().chargeImbalanced()).count());
         summary.put("findings", severityCounts(m.allFindings()));
+        if (m.mapping().enabled()) {
+            Map<String, Object> statuses = new TreeMap<>();
+            m.reactions().forEach(r -> {
+                if (r.mapping() != null) {
+                    statuses.merge(r.mapping().status().label(), 1, (a, b) -> (Integer) a + (Integer) b);
+                }
+            });
+            summary.put("mapping", statuses);
+        } else {
+            summary.put("mapping", null);
+        }
         o.put("summary", summary);
         o.put("findings", findings(m.modelFindings(), gate));
         List<Object> reactions = new ArrayList<>();
@@ -158,7 +172,47 @@ public final class JsonReporter implements Reporter {
         balance.put("elements", b.elementsComputable() ? elements : null);
         balance.put("charge", b.charge() == null ? null : b.charge().toString());
         o.put("balance", balance);
+        o.put("mapping", r.mapping() == null ? null : mapping(r.mapping()));
         o.put("findings", findings(r.findings(), gate));
+        return o;
+    }
+
+    private static Map<String, Object> mapping(ReactionMapping m) {
+        Map<String, Object> o = new LinkedHashMap<>();
+        o.put("status", m.status().label());
+        o.put("carbon", transitions(m.carbons()));
+        o.put("cost", m.cost() < 0 ? null : m.cost());
+        o.put("lowerBound", m.lowerBound() < 0 ? null : m.lowerBound());
+        List<Object> alternatives = new ArrayList<>();
+        m.alternatives().forEach(a -> alternatives.add(transitions(a)));
+        o.put("alternatives", alternatives);
+        o.put("mappedSmiles", m.mappedSmiles().isEmpty() ? null : m.mappedSmiles());
+        o.put("stereoNotes", m.stereoNotes());
+        o.put("reason", m.reason().isEmpty() ? null : m.reason());
+        o.put("missingStructures", m.missingStructures());
+        Map<String, String> diff = new TreeMap<>();
+        m.elementDifference().forEach((k, v) -> diff.put(k, Long.toString(v)));
+        o.put("elementDifference", diff);
+        o.put("structures", new TreeMap<>(m.fingerprints()));
+        return o;
+    }
+
+    private static List<Object> transitions(List<AtomTransition> list) {
+        List<Object> out = new ArrayList<>();
+        for (AtomTransition t : list) {
+            Map<String, Object> o = new LinkedHashMap<>();
+            o.put("from", atom(t.from()));
+            o.put("to", atom(t.to()));
+            out.add(o);
+        }
+        return out;
+    }
+
+    private static Map<String, Object> atom(AtomRef a) {
+        Map<String, Object> o = new LinkedHashMap<>();
+        o.put("species", a.species());
+        o.put("copy", a.copy());
+        o.put("atom", a.atom());
         return o;
     }
 

@@ -62,11 +62,11 @@ class SeverityPolicyTest {
 
     @Test
     void unknownRuleIdIsRejectedWithTheListOfKnownOnes() {
+        String known = String.join(", ", StandardChecks.all().stream().map(c -> c.ruleId()).sorted().toList());
+        assertThat(known).startsWith("balance.charge, ").contains("model.duplicate-id");
         assertThatThrownBy(() -> policy(Map.of("balance.chrage", "warning"), Map.of()))
                 .isInstanceOf(IllegalArgumentException.class)
-                .hasMessageStartingWith("unknown rule id 'balance.chrage' in severities; known rule ids: balance.charge, ")
-                .hasMessageContaining("model.duplicate-id")
-                .hasMessageEndingWith("model.unknown-symbol");
+                .hasMessage("unknown rule id 'balance.chrage' in severities; known rule ids: " + known);
     }
 
     @Test

@@ -1,0 +1,87 @@
+package io.github.atomledger.checker.check.mapping;
+
+import io.github.atomledger.atommapper.mapping.AtomTransition;
+import io.github.atomledger.checker.annotate.CarbonMapText;
+import io.github.atomledger.checker.check.CheckContext;
+import io.github.atomledger.checker.check.Finding;
+import io.github.atomledger.checker.check.ModelCheck;
+import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.model.ReactionInfo;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * Curated carbon maps (AtomLedger annotations with {@code origin="curated"}):
+ * {@code mapping.curated-invalid} when the map is not a carbon map of the reaction's structures
+ * (unknown atoms, non-carbons, atoms used twice or not at all), and {@code mapping.curated-differs}
+ * when it is valid but differs from every minimum-cost map (not merely by symmetry): the finding
+ * names the carbons that go elsewhere and how many more weighted bond edits the curated map needs.
+ * A curated map can be right where the criterion is not (enzymes do not always take the
+ * cheapest route); the finding asks for a look, it does not settle the chemistry.
+ */
+public final class CuratedMapCheck implements ModelCheck {
+
+    private final boolean validity;
+
+    private CuratedMapCheck(boolean validity) {
+        this.validity = validity;
+    }
+
+    public static List<ModelCheck> all() {
+        return List.of(new CuratedMapCheck(true), new CuratedMapCheck(false));
+    }
+
+    @Override
+    public String ruleId() {
+        return validity ? "mapping.curated-invalid" : "mapping.curated-differs";
+    }
+
+    @Override
+    public String description() {
+        return validity ? "A curated carbon map is not a valid map of the reaction's carbons."
+                : "A curated carbon map differs from the minimum bond-edit map.";
+    }
+
+    @Override
+    public Severity defaultSeverity() {
+        return Severity.ERROR;
+    }
+
+    @Override
+    public List<Finding> check(CheckContext context) {
+        List<Finding> out = new ArrayList<>();
+        for (ReactionInfo r : context.model().reactions()) {
+            CuratedVerdict v = context.mapping().curated().get(r.id());
+            if (v == null) {
+                continue;
+            }
+            if (validity && !v.valid()) {
+                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
+                        + " is invalid: " + String.join("; ", v.problems()) + ".",
+                        Map.of("problems", String.join("; ", v.problems()), "problemCount", Integer.toString(v.problems().size()))));
+            } else if (!validity && v.valid() && !v.agrees() && !v.differing().isEmpty()) {
+                Map<String, String> data = new TreeMap<>();
+                List<String> moved = new ArrayList<>();
+                for (AtomTransition t : v.differing()) {
+                    moved.add(t.from() + "->" + t.to());
+                }
+                data.put("differing", String.join(",", moved));
+                data.put("differingCount", Integer.toString(moved.size()));
+                data.put("extraCost", Integer.toString(v.extraCost()));
+                ReactionMapping m = context.mapping().mappings().get(r.id());
+                if (m != null) {
+                    data.put("optimum", String.join("; ", CarbonMapText.format(m.carbons())));
+                }
+                String cost = v.extraCost() >= 0 ? " and needs " + v.extraCost() + " more weighted bond edit(s) than the optimum" : "";
+                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
+                        + " differs from the minimum bond-edit map: " + moved.size() + " carbon(s) go elsewhere ("
+                        + String.join(", ", moved.stream().limit(6).toList()) + (moved.size() > 6 ? ", ..." : "") + ")"
+                        + cost + ".", data));
+            }
+        }
+        return out;
+    }
+}

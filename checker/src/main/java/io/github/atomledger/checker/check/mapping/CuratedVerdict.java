@@ -1,0 +1,33 @@
+package io.github.atomledger.checker.check.mapping;
+
+import io.github.atomledger.atommapper.mapping.AtomTransition;
+
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * How a curated (hand-written or pinned) carbon map compares with the structures and the inferred
+ * optimum.
+ *
+ * @param reactionId   the reaction
+ * @param problems     why the map is not a valid carbon map (unknown atoms, non-carbons, atoms used
+ *                     twice or not at all); empty when valid
+ * @param agrees       true when the map equals the inferred optimum or one of its co-optimal
+ *                     alternatives, up to symmetry
+ * @param extraCost    weighted bond edits the curated map needs beyond the optimum (0 when it
+ *                     agrees, -1 when unknown)
+ * @param differing    curated transitions that differ from the optimum (the carbons that go elsewhere)
+ */
+public record CuratedVerdict(String reactionId, List<String> problems, boolean agrees, int extraCost,
+                             List<AtomTransition> differing) {
+
+    public CuratedVerdict {
+        Objects.requireNonNull(reactionId, "reactionId");
+        problems = List.copyOf(problems);
+        differing = differing.stream().sorted().toList();
+    }
+
+    public boolean valid() {
+        return problems.isEmpty();
+    }
+}

@@ -1,0 +1,29 @@
+package io.github.atomledger.checker.check.mapping;
+
+import io.github.atomledger.checker.annotate.TransitionAnnotation;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
+
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * Mapping results of one model for the checks: per-reaction maps, curated-map verdicts, the
+ * annotations stored in the model and the resolved species structures. {@link #NONE} when mapping
+ * was not run. Immutable.
+ */
+public record MappingData(boolean enabled, Map<String, ReactionMapping> mappings,
+                          Map<String, CuratedVerdict> curated, Map<String, TransitionAnnotation> stored,
+                          SpeciesStructures structures) {
+
+    public static final MappingData NONE = new MappingData(false, Map.of(), Map.of(), Map.of(), SpeciesStructures.EMPTY);
+
+    public MappingData {
+        mappings = Map.copyOf(mappings);
+        curated = Map.copyOf(curated);
+        stored = Map.copyOf(stored);
+    }
+
+    public Optional<ReactionMapping> mapping(String reactionId) {
+        return Optional.ofNullable(mappings.get(reactionId));
+    }
+}

@@ -1,0 +1,203 @@
+package io.github.atomledger.checker.engine;
+
+import io.github.atomledger.atommapper.mapping.AtomMapper;
+import io.github.atomledger.atommapper.mapping.MappingResult;
+import io.github.atomledger.atommapper.mapping.MappingStatus;
+import io.github.atomledger.atommapper.mapping.ReactionInput;
+import io.github.atomledger.checker.AtomLedgerException;
+import io.github.atomledger.checker.annotate.AnnotationIndex;
+import io.github.atomledger.checker.annotate.StoredStructure;
+import io.github.atomledger.checker.annotate.TransitionAnnotation;
+import io.github.atomledger.checker.check.balance.ReactionBalance;
+import io.github.atomledger.checker.check.mapping.CuratedVerdict;
+import io.github.atomledger.checker.check.mapping.MapStatus;
+import io.github.atomledger.checker.check.mapping.MappingData;
+import io.github.atomledger.checker.check.mapping.ReactionMapping;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
+import io.github.atomledger.checker.check.structure.StructureResolver;
+import io.github.atomledger.checker.check.structure.StructureTable;
+import io.github.atomledger.checker.model.ModelView;
+import io.github.atomledger.checker.model.ReactionInfo;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
+import java.util.concurrent.atomic.AtomicInteger;
+
+/**
+ * Maps the reactions of one model: resolves structures, builds mapper inputs, takes results from
+ * the cache or maps the rest in parallel (progress every few seconds), and validates curated maps
+ * stored in the model. Results are in document order and do not depend on the thread count.
+ */
+final class MappingStage {
+
+    private static final long PROGRESS_MILLIS = 5_000;
+
+    private final MappingConfig config;
+    private final Path baseDirectory;
+    private final long maxBytes;
+    private final RunListener listener;
+    private final AtomMapper mapper;
+    private final MappingCache cache;
+
+    MappingStage(MappingConfig config, Path baseDirectory, long maxBytes, RunListener listener) {
+        this.config = config;
+        this.baseDirectory = baseDirectory;
+        this.maxBytes = maxBytes;
+        this.listener = listener;
+        this.mapper = new AtomMapper(config.options());
+        this.cache = config.cacheDirectory() == null ? null : new MappingCache(config.cacheDirectory());
+    }
+
+    MappingData run(ModelView model, Path file, Map<String, ReactionBalance> balances) {
+        AnnotationIndex index = AnnotationIndex.read(file, model.file(), maxBytes);
+        Map<String, TransitionAnnotation> stored = new LinkedHashMap<>();
+        Map<String, String> storedSmiles = new TreeMap<>();
+        index.reactions().forEach((id, spot) -> {
+            if (spot.stored() != null) {
+                stored.put(id, spot.stored());
+                for (StoredStructure s : spot.stored().structures()) {
+                    storedSmiles.putIfAbsent(s.species(), s.smiles());
+                }
+            }
+        });
+        StructureTable table = config.structures() == null ? StructureTable.empty()
+                : StructureTable.load(config.structures(), ModelLocator.relative(baseDirectory, config.structures()));
+        SpeciesStructures structures = new StructureResolver().resolve(model, table, storedSmiles);
+
+        Map<String, ReactionMapping> results = new LinkedHashMap<>();
+        Map<String, ReactionInput> inputs = new LinkedHashMap<>();
+        List<Job> jobs = new ArrayList<>();
+        for (ReactionInfo r : model.reactions()) {
+            if (results.containsKey(r.id()) || inputs.containsKey(r.id())) {
+                continue;
+            }
+            ReactionBalance b = balances.get(r.id());
+            Prepared p = MappingInputs.prepare(r, b, structures);
+            if (p.early() != null) {
+                results.put(r.id(), p.early());
+                continue;
+            }
+            inputs.put(r.id(), p.input());
+            String key = MappingCache.key("mapper=" + AtomMapper.VERSION + ";options=" + config.options().fingerprint()
+                    + ";" + p.canonical());
+            ReactionMapping hit = cache == null ? null : cache.get(key, r.id());
+            if (hit != null) {
+                results.put(r.id(), hit);
+            } else {
+                results.put(r.id(), null);
+                jobs.add(new Job(r.id(), p.input(), key, p.fingerprints()));
+            }
+        }
+        runJobs(model.file(), jobs, results);
+        Map<String, CuratedVerdict> curated = new LinkedHashMap<>();
+        stored.forEach((id, annotation) -> {
+            ReactionInput input = inputs.get(id);
+            ReactionMapping optimum = results.get(id);
+            if (annotation.isCurated() && input != null && optimum != null) {
+                curated.put(id, CuratedMaps.judge(mapper, input, optimum, annotation.carbons()));
+            }
+        });
+        return new MappingData(true, results, curated, stored, structures);
+    }
+
+    private record Job(String reactionId, ReactionInput input, String key, Map<String, String> fingerprints) {
+    }
+
+    /** A reaction ready for the mapper, or the result that makes mapping unnecessary. */
+    record Prepared(ReactionInput input, String canonical, Map<String, String> fingerprints, ReactionMapping early) {
+    }
+
+    private void runJobs(String file, List<Job> jobs, Map<String, ReactionMapping> results) {
+        if (jobs.isEmpty()) {
+            return;
+        }
+        ExecutorService pool = Executors.newFixedThreadPool(config.threads(), r -> {
+            Thread t = new Thread(r, "atomledger-mapper");
+            t.setDaemon(true);
+            return t;
+        });
+        AtomicInteger done = new AtomicInteger();
+        Map<MapStatus, AtomicInteger> counts = new EnumMap<>(MapStatus.class);
+        for (MapStatus s : MapStatus.values()) {
+            counts.put(s, new AtomicInteger());
+        }
+        try {
+            List<Future<ReactionMapping>> futures = new ArrayList<>();
+            for (Job j : jobs) {
+                futures.add(pool.submit(() -> {
+                    ReactionMapping m = toMapping(mapper.map(j.input()), j.fingerprints());
+                    counts.get(m.status()).incrementAndGet();
+                    done.incrementAndGet();
+                    return m;
+                }));
+            }
+            long start = System.nanoTime();
+            long lastReport = System.currentTimeMillis();
+            for (int i = 0; i < jobs.size(); i++) {
+                ReactionMapping m = null;
+                while (m == null) {
+                    try {
+                        m = futures.get(i).get(500, TimeUnit.MILLISECONDS);
+                    } catch (TimeoutException e) {
+                        if (System.currentTimeMillis() - lastReport >= PROGRESS_MILLIS) {
+                            lastReport = System.currentTimeMillis();
+                            listener.info(progress(file, done.get(), jobs.size(), counts, start));
+                        }
+                    }
+                }
+                Job j = jobs.get(i);
+                results.put(j.reactionId(), m);
+                if (cache != null) {
+                    cache.put(j.key(), m);
+                }
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new AtomLedgerException(file + ": mapping was interrupted", e);
+        } catch (ExecutionException e) {
+            throw new AtomLedgerException(file + ": the atom mapper failed: " + e.getCause(), e.getCause());
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    private static String progress(String file, int done, int total, Map<MapStatus, AtomicInteger> counts, long start) {
+        double elapsed = (System.nanoTime() - start) / 1e9;
+        long left = done == 0 ? -1 : Math.round(elapsed / done * (total - done));
+        StringBuilder sb = new StringBuilder("mapping ").append(file).append(": ").append(done).append('/').append(total)
+                .append(" reactions (");
+        boolean first = true;
+        for (Map.Entry<MapStatus, AtomicInteger> e : counts.entrySet()) {
+            if (e.getValue().get() > 0) {
+                sb.append(first ? "" : ", ").append(e.getValue().get()).append(' ').append(e.getKey().label());
+                first = false;
+            }
+        }
+        return sb.append(")").append(left < 0 ? "" : ", about " + left + " s left").toString();
+    }
+
+    static ReactionMapping toMapping(MappingResult r, Map<String, String> fingerprints) {
+        MapStatus status = switch (r.status()) {
+            case MAPPED -> MapStatus.MAPPED;
+            case AMBIGUOUS -> MapStatus.AMBIGUOUS;
+            case BEST_FOUND -> MapStatus.BEST_FOUND;
+            case UNMAPPABLE -> MapStatus.UNMAPPABLE;
+            case TOO_LARGE -> MapStatus.SKIPPED;
+        };
+        String reason = r.status() == MappingStatus.TOO_LARGE ? "too large for the mapper: " + r.reason() : r.reason();
+        return new ReactionMapping(r.reactionId(), status, r.carbonTransitions(), r.alternatives(), r.cost(),
+                r.lowerBound(), r.mappedSmiles(), r.stereoNotes(), reason, r.elementDifference(), List.of(),
+                new TreeMap<>(fingerprints));
+    }
+}

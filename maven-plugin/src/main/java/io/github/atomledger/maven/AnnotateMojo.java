@@ -1,0 +1,114 @@
+package io.github.atomledger.maven;
+
+import io.github.atomledger.checker.AtomLedgerException;
+import io.github.atomledger.checker.annotate.AnnotationPlan;
+import io.github.atomledger.checker.annotate.ModelAnnotator;
+import io.github.atomledger.checker.engine.Engine;
+import io.github.atomledger.checker.engine.ModelResult;
+import io.github.atomledger.checker.engine.ReactionResult;
+import io.github.atomledger.checker.engine.RunConfig;
+import io.github.atomledger.checker.engine.RunResult;
+
+import java.io.File;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import org.apache.maven.plugin.AbstractMojo;
+import org.apache.maven.plugin.MojoExecutionException;
+import org.apache.maven.plugins.annotations.Mojo;
+import org.apache.maven.plugins.annotations.Parameter;
+
+/**
+ * Maps every reaction and writes the carbon transitions of each proven, unique map into the model
+ * as an AtomLedger annotation ({@code atomTransitions}, namespace
+ * {@code http://atomledger.github.io/ns/atom-transitions/1}) inside the reaction's
+ * {@code <annotation>}. Everything else in the file stays byte-for-byte as it was; curated maps are
+ * kept unless {@code overwriteCurated}; the write is atomic. Ambiguous maps are not written.
+ *
+ * <p>Without a pom: {@code mvn io.github.atomledger:atomledger-maven-plugin:VERSION:annotate
+ * -Datomledger.models=models/my.xml -Datomledger.structures=structures.tsv}.
+ */
+@Mojo(name = "annotate", threadSafe = true, requiresProject = false)
+public final class AnnotateMojo extends AbstractMojo {
+
+    /** Model files or glob patterns (as for {@code check}). Default {@code models/**.{xml,xml.gz}}. */
+    @Parameter(property = "atomledger.models")
+    private List<String> models;
+
+    /** Skips the goal. Default {@code false}. */
+    @Parameter(property = "atomledger.skip", defaultValue = "false")
+    private boolean skip;
+
+    /** Reports what would change without writing anything. Default {@code false}. */
+    @Parameter(property = "atomledger.dryRun", defaultValue = "false")
+    private boolean dryRun;
+
+    /** Replaces curated ({@code origin="curated"}) maps too. Default {@code false}. */
+    @Parameter(property = "atomledger.overwriteCurated", defaultValue = "false")
+    private boolean overwriteCurated;
+
+    /** Species structure side table (TSV: {@code species}, {@code smiles} or {@code inchi}). */
+    @Parameter(property = "atomledger.structures")
+    private File structures;
+
+    /** Mapping threads; 0 means one per core. Default 0. */
+    @Parameter(property = "atomledger.threads", defaultValue = "0")
+    private int threads;
+
+    /** Mapping cache directory, or {@code none}. Default {@code ~/.cache/atomledger/maps}. */
+    @Parameter(property = "atomledger.cacheDirectory")
+    private String cacheDirectory;
+
+    /** Time budget per reaction in milliseconds. Default 2000. */
+    @Parameter(property = "atomledger.mappingTimeBudget", defaultValue = "2000")
+    private long mappingTimeBudget;
+
+    /** Size cap per molecule in heavy atoms. Default 400. */
+    @Parameter(property = "atomledger.maxHeavyAtoms", defaultValue = "400")
+    private int maxHeavyAtoms;
+
+    /** The most bytes of XML read from one model file, after gzip decompression. Default 1 GiB. */
+    @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1073741824")
+    private long maxModelBytes;
+
+    @Parameter(defaultValue = "${basedir}", readonly = true, required = true)
+    private File baseDirectory;
+
+    @Override
+    public void execute() throws MojoExecutionException {
+        if (skip) {
+            getLog().info("AtomLedger annotate skipped (atomledger.skip=true)");
+            return;
+        }
+        RunConfig config = ConfigMapper.toConfig(baseDirectory, models, new File(baseDirectory, "target/atomledger"),
+                "none", "json", Map.of(), Map.of(), maxModelBytes)
+                .withMapping(ConfigMapper.mapping("on", baseDirectory, structures, threads, cacheDirectory,
+                        mappingTimeBudget, maxHeavyAtoms));
+        try {
+            RunResult result = new Engine().run(config, new MavenRunListener(getLog()));
+            ModelAnnotator annotator = new ModelAnnotator(overwriteCurated, dryRun, maxModelBytes);
+            for (ModelResult m : result.models()) {
+                ModelAnnotator.Outcome out = annotator.annotate(config.baseDirectory().resolve(m.file()), m.file(),
+                        AnnotationPlan.of(m));
+                getLog().info(summary(m, out));
+            }
+        } catch (AtomLedgerException e) {
+            throw new MojoExecutionException(e.getMessage(), e);
+        }
+    }
+
+    private String summary(ModelResult m, ModelAnnotator.Outcome out) {
+        Map<ModelAnnotator.Action, Integer> counts = new EnumMap<>(ModelAnnotator.Action.class);
+        out.changes().forEach(c -> counts.merge(c.action(), 1, Integer::sum));
+        long notWritten = m.reactions().stream().map(ReactionResult::mapping)
+                .filter(x -> x != null && x.hasMap() && x.status() != io.github.atomledger.checker.check.mapping.MapStatus.MAPPED)
+                .count();
+        String verb = dryRun ? "would add " : "added ";
+        return m.file() + ": " + verb + counts.getOrDefault(ModelAnnotator.Action.ADDED, 0) + ", "
+                + (dryRun ? "would replace " : "replaced ") + counts.getOrDefault(ModelAnnotator.Action.REPLACED, 0)
+                + ", unchanged " + counts.getOrDefault(ModelAnnotator.Action.UNCHANGED, 0)
+                + ", curated kept " + counts.getOrDefault(ModelAnnotator.Action.KEPT_CURATED, 0)
+                + "; " + notWritten + " ambiguous or unproven map(s) not written"
+                + (out.written() ? "" : dryRun ? " (dry run: nothing written)" : " (file unchanged)");
+    }
+}
