@@ -18,7 +18,8 @@ assert findings.findAll { it.ruleId in diffRules }.collect { [it.ruleId, it.elem
 def pgi = findings.find { it.ruleId == 'mapping.transitions-changed' }
 assert pgi.data == ['moved': '2', 'moved.g6p_c#1:5': 'f6p_c#1:5 -> f6p_c#1:6', 'moved.g6p_c#1:6': 'f6p_c#1:6 -> f6p_c#1:5', 'now': 'mapped']
 assert findings.find { it.ruleId == 'balance.regression' && it.elementId == 'R_HEX' }.data ==
-        ['class': 'internal', 'delta.H': '-1', 'delta.charge': '-1', 'now': 'imbalanced', 'was': 'balanced']
+        ['class': 'internal', 'delta.H': '-1', 'delta.charge': '-1', 'now.charge': 'imbalanced', 'now.elements': 'imbalanced',
+         'was.charge': 'balanced', 'was.elements': 'balanced']
 assert findings.any { it.ruleId == 'balance.elements' && it.elementId == 'R_G6PH' && it.severity == 'error' }
 assert report.summary.gate == [failOn: 'regressions']
 assert report.summary.failed == true

@@ -23,11 +23,12 @@ import java.util.TreeSet;
  * what changed as findings on the current model:
  * <ul>
  * <li>{@value #ADDED} (info), {@value #REMOVED} (warning): reactions that appeared or went away;</li>
- * <li>{@value #REGRESSION} (error): a reaction whose balance is checked is imbalanced or not
- *     computable now, but was balanced before; or is imbalanced now and was new, exempt or not
- *     computable before;</li>
- * <li>{@value #CHANGED} (warning): imbalanced in both versions, by a different amount;</li>
- * <li>{@value #FIXED} (info): imbalanced before, balanced now;</li>
+ * <li>{@value #REGRESSION} (error): for the elements or the charge of a reaction whose balance is
+ *     checked: balanced before and imbalanced or unknown now; or imbalanced now and new, exempt or
+ *     unknown before;</li>
+ * <li>{@value #CHANGED} (warning): no regression, but imbalanced in both versions by a different
+ *     amount;</li>
+ * <li>{@value #FIXED} (info): neither of those, and imbalanced before, balanced now;</li>
  * <li>{@value #TRANSITIONS} (warning): both versions carry carbon transitions for the reaction and
  *     some carbon now goes elsewhere, or the previous version carried them and this one does not.</li>
  * </ul>
@@ -66,10 +67,9 @@ public final class ReleaseDiff {
         return java.util.Collections.unmodifiableMap(m);
     }
 
-    /** What a version says about a reaction's balance. */
+    /** What a version says about one part (elements or charge) of a reaction's balance. */
     enum State {
-        ABSENT("absent"), EXEMPT("exempt"), BALANCED("balanced"), IMBALANCED("imbalanced"),
-        NOT_COMPUTABLE("not-computable");
+        ABSENT("absent"), EXEMPT("exempt"), BALANCED("balanced"), IMBALANCED("imbalanced"), UNKNOWN("unknown");
 
         final String label;
 
@@ -77,18 +77,35 @@ public final class ReleaseDiff {
             this.label = label;
         }
 
-        static State of(ReactionResult r) {
+        static State elements(ReactionResult r) {
+            State s = outside(r);
+            if (s != null) {
+                return s;
+            }
+            ReactionBalance b = r.balance();
+            return !b.elementsComputable() ? UNKNOWN : b.elements().isEmpty() ? BALANCED : IMBALANCED;
+        }
+
+        static State charge(ReactionResult r) {
+            State s = outside(r);
+            if (s != null) {
+                return s;
+            }
+            Rational c = r.balance().charge();
+            return c == null ? UNKNOWN : c.isZero() ? BALANCED : IMBALANCED;
+        }
+
+        private static State outside(ReactionResult r) {
             if (r == null) {
                 return ABSENT;
             }
-            ReactionBalance b = r.balance();
-            if (!b.reactionClass().balanceComputed()) {
-                return EXEMPT;
-            }
-            if (b.elementImbalanced() || b.chargeImbalanced()) {
-                return IMBALANCED;
-            }
-            return b.elementsComputable() && b.charge() != null ? BALANCED : NOT_COMPUTABLE;
+            return r.balance().reactionClass().balanceComputed() ? null : EXEMPT;
+        }
+
+        /** Balanced before and imbalanced or unknown now; or imbalanced now and not known before. */
+        static boolean regressed(State was, State now) {
+            return (was == BALANCED && (now == IMBALANCED || now == UNKNOWN))
+                    || (now == IMBALANCED && (was == ABSENT || was == EXEMPT || was == UNKNOWN));
         }
     }
 
@@ -128,32 +145,38 @@ public final class ReleaseDiff {
     }
 
     private static java.util.Optional<Finding> balance(ReactionResult p, ReactionResult r, String file) {
-        State was = State.of(p);
-        State is = State.of(r);
+        State wasElements = State.elements(p);
+        State wasCharge = State.charge(p);
+        State nowElements = State.elements(r);
+        State nowCharge = State.charge(r);
         Map<String, String> data = new TreeMap<>();
         data.put("class", r.reactionClass().label());
-        data.put("was", was.label);
-        data.put("now", is.label);
+        data.put("was.elements", wasElements.label);
+        data.put("was.charge", wasCharge.label);
+        data.put("now.elements", nowElements.label);
+        data.put("now.charge", nowCharge.label);
         deltas(r.balance(), "delta.", data);
-        if (was == State.IMBALANCED) {
+        if (wasElements == State.IMBALANCED || wasCharge == State.IMBALANCED) {
             deltas(p.balance(), "previous.delta.", data);
         }
         String id = r.id();
-        boolean regression = (was == State.BALANCED && (is == State.IMBALANCED || is == State.NOT_COMPUTABLE))
-                || (is == State.IMBALANCED && was != State.BALANCED && was != State.IMBALANCED);
-        if (regression) {
-            String how = is == State.IMBALANCED ? "is imbalanced (" + describe(r.balance()) + ")" : "cannot be balanced";
-            return java.util.Optional.of(finding(REGRESSION, file, r, "Reaction " + id + " " + how
-                    + " in this release; it was " + was.label + " before.", data));
+        String before = "elements " + wasElements.label + ", charge " + wasCharge.label;
+        if (State.regressed(wasElements, nowElements) || State.regressed(wasCharge, nowCharge)) {
+            return java.util.Optional.of(finding(REGRESSION, file, r, "Reaction " + id + " regressed: "
+                    + describe(r.balance()) + " in this release (before: " + before + ").", data));
         }
-        if (was == State.IMBALANCED && is == State.IMBALANCED
-                && !describe(p.balance()).equals(describe(r.balance()))) {
-            return java.util.Optional.of(finding(CHANGED, file, r, "Reaction " + id + " is imbalanced by "
+        boolean differs = (wasElements == State.IMBALANCED && nowElements == State.IMBALANCED
+                && !p.balance().elements().equals(r.balance().elements()))
+                || (wasCharge == State.IMBALANCED && nowCharge == State.IMBALANCED
+                && !p.balance().charge().equals(r.balance().charge()));
+        if (differs) {
+            return java.util.Optional.of(finding(CHANGED, file, r, "Reaction " + id + " is off by "
                     + describe(r.balance()) + " in this release instead of " + describe(p.balance()) + ".", data));
         }
-        if (was == State.IMBALANCED && is == State.BALANCED) {
-            return java.util.Optional.of(finding(FIXED, file, r, "Reaction " + id + " balances in this release; it was off by "
-                    + describe(p.balance()) + " before.", data));
+        if ((wasElements == State.IMBALANCED && nowElements == State.BALANCED)
+                || (wasCharge == State.IMBALANCED && nowCharge == State.BALANCED)) {
+            return java.util.Optional.of(finding(FIXED, file, r, "Reaction " + id + " was off by " + describe(p.balance())
+                    + " before; in this release: " + describe(r.balance()) + ".", data));
         }
         return java.util.Optional.empty();
     }
@@ -213,7 +236,7 @@ public final class ReleaseDiff {
         }
     }
 
-    /** "H -1, charge -1" style text of an imbalance, "elements unknown" when not computable. */
+    /** "H -1, charge -1" style text of an imbalance ("elements unknown", "charge unknown"; "balanced"). */
     static String describe(ReactionBalance b) {
         List<String> parts = new ArrayList<>();
         if (!b.elementsComputable()) {
@@ -226,7 +249,7 @@ public final class ReleaseDiff {
         } else if (!b.charge().isZero()) {
             parts.add("charge " + Deltas.signed(b.charge()));
         }
-        return parts.isEmpty() ? "nothing" : String.join(", ", parts);
+        return parts.isEmpty() ? "balanced" : String.join(", ", parts);
     }
 
     private static Finding finding(String rule, String file, ReactionResult r, String message, Map<String, String> data) {

@@ -64,9 +64,13 @@ class ReleaseDiffTest {
     void regressionDataNamesTheStatesAndTheExactImbalance() {
         Finding hex = only(diff("release-1.xml", "release-2.xml"), "balance.regression", "R_HEX");
         assertThat(hex.data()).containsExactlyEntriesOf(new java.util.TreeMap<>(Map.of("class", "internal",
-                "was", "balanced", "now", "imbalanced", "delta.H", "-1", "delta.charge", "-1")));
+                "was.elements", "balanced", "was.charge", "balanced", "now.elements", "imbalanced",
+                "now.charge", "imbalanced", "delta.H", "-1", "delta.charge", "-1")));
+        assertThat(hex.message()).isEqualTo("Reaction R_HEX regressed: H -1, charge -1 in this release"
+                + " (before: elements balanced, charge balanced).");
         Finding added = only(diff("release-1.xml", "release-2.xml"), "balance.regression", "R_ATPASE2");
-        assertThat(added.data()).containsEntry("was", "absent").containsEntry("delta.O", "1").containsEntry("delta.charge", "-1");
+        assertThat(added.data()).containsEntry("was.elements", "absent").containsEntry("delta.O", "1")
+                .containsEntry("delta.charge", "-1");
     }
 
     @Test
