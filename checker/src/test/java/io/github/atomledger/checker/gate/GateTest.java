@@ -123,6 +123,18 @@ class GateTest {
     }
 
     @Test
+    void theSeverityPolicyAppliesToTheGatesOwnFindings() {
+        config = config.withPolicy(io.github.atomledger.checker.engine.SeverityPolicy.of(
+                java.util.Map.of("balance.regression", "warning", "model.reaction-removed", "off"), java.util.Map.of(),
+                Gate.ruleIds()));
+        RunResult r = gate(new GateConfig(null, false, base.resolve("target/previous"), FailScope.REGRESSIONS));
+        assertThat(r.failing()).isEmpty();
+        assertThat(r.allFindings()).filteredOn(f -> f.ruleId().equals("balance.regression"))
+                .extracting(Finding::severity).containsOnly(Severity.WARNING).hasSize(2);
+        assertThat(r.allFindings()).noneMatch(f -> f.ruleId().equals("model.reaction-removed"));
+    }
+
+    @Test
     void failingOnRegressionsNeedsPreviousModels() {
         assertThatThrownBy(() -> new GateConfig(null, false, null, FailScope.REGRESSIONS))
                 .hasMessageStartingWith("failOn=regressions needs previousModels");
