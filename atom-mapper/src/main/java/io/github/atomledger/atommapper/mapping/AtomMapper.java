@@ -1,6 +1,7 @@
 package io.github.atomledger.atommapper.mapping;
 
 import io.github.atomledger.atommapper.mapping.internal.Search;
+import io.github.atomledger.atommapper.mapping.internal.SearchClock;
 import io.github.atomledger.atommapper.mapping.internal.SideGraph;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -84,15 +85,20 @@ public final class AtomMapper {
                     List.of(), List.of(), "", difference, "heavy atoms do not balance (products minus reactants: "
                     + text + ")", elapsed(start));
         }
+        int heavy = 0;
+        for (Participant part : reaction.reactants()) {
+            heavy += part.structure().heavyAtomCount() * part.coefficient();
+        }
+        // Checked before any graph is built: the side graphs keep an n-by-n bond table.
+        if (heavy > options.maxHeavyAtoms()) {
+            return new MappingResult(id, MappingStatus.TOO_LARGE, List.of(), List.of(), -1, -1, List.of(), List.of(),
+                    List.of(), "", new TreeMap<>(), "each side has " + heavy
+                    + " heavy atoms, more than the cap of " + options.maxHeavyAtoms(), elapsed(start));
+        }
         Map<String, Integer> elementIds = new HashMap<>();
         Map<String, Integer> orbitIds = new HashMap<>();
         SideGraph r = new SideGraph(reaction.reactants(), elementIds, orbitIds);
         SideGraph p = new SideGraph(reaction.products(), elementIds, orbitIds);
-        if (r.atomCount() > options.maxHeavyAtoms()) {
-            return new MappingResult(id, MappingStatus.TOO_LARGE, List.of(), List.of(), -1, -1, List.of(), List.of(),
-                    List.of(), "", new TreeMap<>(), "each side has " + r.atomCount()
-                    + " heavy atoms, more than the cap of " + options.maxHeavyAtoms(), elapsed(start));
-        }
         int[] pin = new int[r.atomCount()];
         Arrays.fill(pin, -1);
         String pinProblem = resolvePins(r, p, pins, pin);
@@ -100,11 +106,16 @@ public final class AtomMapper {
             return new MappingResult(id, MappingStatus.UNMAPPABLE, List.of(), List.of(), -1, -1, List.of(), List.of(),
                     List.of(), "", new TreeMap<>(), pinProblem, elapsed(start));
         }
-        Search search = new Search(r, p, options, pin, start + options.timeBudget().toNanos());
+        Search search = new Search(r, p, options, pin, SearchClock.now() + options.timeBudget().toNanos());
         boolean proven = search.optimise();
         int[] best = search.best();
         int lower = search.lowerBound();
         ResultWriter writer = new ResultWriter(r, p, options);
+        if (best == null) {
+            return new MappingResult(id, MappingStatus.BEST_FOUND, List.of(), List.of(), -1, lower, List.of(),
+                    List.of(), List.of(), "", new TreeMap<>(), "the budget ran out before any complete map was found",
+                    elapsed(start));
+        }
         if (!proven) {
             return writer.result(id, MappingStatus.BEST_FOUND, best, search.upper(), lower, List.of(),
                     "the time or node budget ran out before the optimum was proven (best " + search.upper()

@@ -11,9 +11,10 @@ import java.util.Objects;
  * {@code otherBondWeight}; changing the order of a kept bond costs {@code orderChangeWeight}.
  * Defaults 2, 1, 1.
  *
- * @param timeBudget wall-clock budget per reaction (positive); when reached the result is
+ * @param timeBudget computing budget per reaction (positive), counted in CPU time of the mapping
+ *     thread where the JVM supports it (wall time otherwise); when reached the result is
  *     {@link MappingStatus#BEST_FOUND}
- * @param maxHeavyAtoms cap on heavy atoms per reaction side (copies counted); above it the result is
+ * @param maxHeavyAtoms cap on heavy atoms per reaction side (copies counted, at most 20000); above it the result is
  *     {@link MappingStatus#TOO_LARGE}
  * @param nodeLimit cap on search nodes per reaction, a deterministic budget (positive; use
  *     {@link Long#MAX_VALUE} for none)
@@ -32,8 +33,8 @@ public record MappingOptions(Duration timeBudget, int maxHeavyAtoms, long nodeLi
         if (timeBudget.isNegative() || timeBudget.isZero()) {
             throw new IllegalArgumentException("timeBudget must be positive, got " + timeBudget);
         }
-        if (maxHeavyAtoms < 1 || nodeLimit < 1 || maxAlternatives < 1) {
-            throw new IllegalArgumentException("maxHeavyAtoms, nodeLimit and maxAlternatives must be positive");
+        if (maxHeavyAtoms < 1 || maxHeavyAtoms > 20_000 || nodeLimit < 1 || maxAlternatives < 1) {
+            throw new IllegalArgumentException("maxHeavyAtoms (1..20000), nodeLimit and maxAlternatives must be positive");
         }
         if (carbonCarbonWeight < 1 || otherBondWeight < 1 || orderChangeWeight < 1
                 || orderChangeWeight > 2 * Math.min(carbonCarbonWeight, otherBondWeight)) {

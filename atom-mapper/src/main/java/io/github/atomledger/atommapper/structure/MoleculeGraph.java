@@ -22,10 +22,10 @@ public final class MoleculeGraph {
     private final String[] elements;
     private final int[][] neighbours;
     private final int[][] bondCodes;
-    private final int[] orbit;
+    private final java.util.function.Supplier<int[]> orbit;
     private final int[] hydrogens;
 
-    MoleculeGraph(String[] elements, int[][] neighbours, int[][] bondCodes, int[] orbit,
+    MoleculeGraph(String[] elements, int[][] neighbours, int[][] bondCodes, java.util.function.Supplier<int[]> orbit,
                   int[] hydrogens) {
         this.elements = elements;
         this.hydrogens = hydrogens;
@@ -71,6 +71,6 @@ public final class MoleculeGraph {
      * CDK's partition refinement; stereo and charge are not looked at).
      */
     public int orbit(int i) {
-        return orbit[i];
+        return orbit.get()[i];
     }
 }

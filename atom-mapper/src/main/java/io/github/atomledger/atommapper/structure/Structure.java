@@ -49,8 +49,8 @@ public final class Structure {
     private final String source;
     private final Formula formula;
     private final int charge;
-    private final String canonicalSmiles;
-    private final String fingerprint;
+    private final java.util.function.Supplier<String> canonicalSmiles;
+    private final java.util.function.Supplier<String> fingerprint;
     private final MoleculeGraph graph;
     private final IAtomContainer master;
     private final int[] heavyToAtom;
@@ -63,7 +63,8 @@ public final class Structure {
                 built.orbits(), built.hydrogens());
         this.heavyToAtom = built.heavyToAtom();
         this.canonicalSmiles = built.canonicalSmiles();
-        this.fingerprint = "sha256:" + sha256(canonicalSmiles).substring(0, 16);
+        this.fingerprint = new io.github.atomledger.atommapper.structure.internal.Lazy<>(
+                () -> "sha256:" + sha256(canonicalSmiles.get()).substring(0, 16));
         SortedMap<String, Long> counts = new TreeMap<>();
         int q = 0;
         for (IAtom atom : parsed.atoms()) {
@@ -147,12 +148,12 @@ public final class Structure {
 
     /** CDK's canonical SMILES with aromatic symbols, stereo and charges: equal for equal molecules. */
     public String canonicalSmiles() {
-        return canonicalSmiles;
+        return canonicalSmiles.get();
     }
 
     /** "sha256:" plus the first 16 hex digits of the SHA-256 of {@link #canonicalSmiles()}. */
     public String fingerprint() {
-        return fingerprint;
+        return fingerprint.get();
     }
 
     /** The heavy-atom graph the atom mapper works on. */
@@ -206,6 +207,14 @@ public final class Structure {
         String m = String.valueOf(e.getMessage()).strip();
         int nl = m.indexOf('\n');
         String line = nl < 0 ? m : m.substring(0, nl).strip();
+        // CDK repeats the input ("could not parse 'C1CC', ..."); the caller quotes it already.
+        if (line.startsWith("could not parse '")) {
+            int comma = line.indexOf("', ");
+            line = comma < 0 ? line : line.substring(comma + 3);
+        }
+        while (line.endsWith(":") || line.endsWith(".")) {
+            line = line.substring(0, line.length() - 1).strip();
+        }
         return line.isEmpty() ? line : Character.toLowerCase(line.charAt(0)) + line.substring(1);
     }
 

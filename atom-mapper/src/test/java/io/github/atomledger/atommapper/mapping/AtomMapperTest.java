@@ -29,6 +29,10 @@ class AtomMapperTest {
         assertThat(two).isEqualTo(one);
         assertThat(two).extracting(MappingResult::reactionId).containsExactly("CS", "MCM", "PDC", "TKT", "THL", "GAPDH");
         assertThat(MAPPER.map(reactions.get(0))).isEqualTo(one.get(0));
+        for (MappingResult r : one) {
+            assertThat(r.bondEdits().stream().mapToInt(BondEdit::weight).sum()).as("%s", r)
+                    .isEqualTo(Math.max(0, r.cost()));
+        }
     }
 
     @Test
@@ -76,6 +80,17 @@ class AtomMapperTest {
         assertThat(pinned.cost()).isGreaterThan(free.cost());
         MappingResult same = MAPPER.map(reaction, Reactions.carbons("dhap 5>g3p 5"));
         assertThat(same.cost()).isEqualTo(free.cost());
+    }
+
+    @Test
+    void honoursPinsOnSymmetricAtoms() {
+        // Succinate's carboxyl carbons are exchanged by symmetry; pinning either end must work.
+        ReactionInput reaction = FIXTURES.reaction("SDH", "succ -> fum");
+        for (String pin : List.of("succ 2>fum 2", "succ 2>fum 6")) {
+            MappingResult pinned = MAPPER.map(reaction, Reactions.carbons(pin));
+            assertThat(pinned.carbonTransitions()).as(pin).contains(Reactions.carbons(pin).get(0));
+            assertThat(pinned.cost()).isEqualTo(MAPPER.map(reaction).cost());
+        }
     }
 
     @Test

@@ -107,6 +107,7 @@ class MapperYeastBenchmarkTest {
         Path data = dataDir();
         assumeTrue(data != null && Files.isRegularFile(data.resolve("yeast-GEM.structures.tsv")),
                 "shared data folder with yeast-GEM is absent");
+        StringBuilder report = new StringBuilder();
         Map<String, Structure> structures = new HashMap<>();
         int badSmiles = 0;
         try (BufferedReader in = Files.newBufferedReader(data.resolve("yeast-GEM.structures.tsv"), StandardCharsets.UTF_8)) {
@@ -141,7 +142,14 @@ class MapperYeastBenchmarkTest {
             }
             inputs.add(new ReactionInput(raw.id(), side(raw.reactants(), structures), side(raw.products(), structures)));
         }
-        AtomMapper mapper = new AtomMapper(MappingOptions.defaults());
+        // Optional overrides for comparing versions under a deterministic budget.
+        MappingOptions options = MappingOptions.defaults();
+        String nodes = System.getProperty("atomledger.bench.nodeLimit");
+        if (nodes != null) {
+            options = options.withNodeLimit(Long.parseLong(nodes)).withTimeBudget(java.time.Duration.ofMinutes(5));
+        }
+        AtomMapper mapper = new AtomMapper(options);
+        report.append("options: ").append(options.fingerprint()).append('\n');
         long start = System.nanoTime();
         List<MappingResult> results = mapper.mapAll(inputs, 2);
         long wallMs = (System.nanoTime() - start) / 1_000_000;
@@ -169,7 +177,6 @@ class MapperYeastBenchmarkTest {
                 peak += pool.getPeakUsage().getUsed();
             }
         }
-        StringBuilder report = new StringBuilder();
         report.append("yeast-GEM mapper benchmark\n");
         report.append("structures parsed: ").append(structures.size()).append(", unparsable SMILES: ").append(badSmiles).append('\n');
         report.append("reactions skipped: one-sided ").append(oneSided).append(", species without SMILES ").append(missing).append('\n');

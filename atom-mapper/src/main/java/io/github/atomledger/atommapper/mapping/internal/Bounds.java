@@ -29,6 +29,8 @@ final class Bounds {
     private final int[][] residualP;
     private final int[] mappedNbrR;
     private final int[] usedNbrP;
+    private final Frontier frontierR;
+    private final Frontier frontierP;
     private final boolean[] carbonR;
     private final boolean[] carbonP;
     private final int cc;
@@ -76,6 +78,8 @@ final class Bounds {
         count(p, residualP);
         mappedNbrR = new int[r.n];
         usedNbrP = new int[p.n];
+        frontierR = new Frontier(r.n);
+        frontierP = new Frontier(p.n);
         carbonR = carbons(r);
         carbonP = carbons(p);
         root = unmappedPairs();
@@ -147,15 +151,19 @@ final class Bounds {
             mappedNbrR[v]++;
             if (map[v] < 0) {
                 residualR[pairType[r.elementId[u]][r.elementId[v]]][r.code[u][k]]--;
+                frontierR.add(v);
             }
         }
+        frontierR.remove(u);
         for (int k = 0; k < p.nbr[x].length; k++) {
             int y = p.nbr[x][k];
             usedNbrP[y]++;
             if (inv[y] < 0) {
                 residualP[pairType[p.elementId[x]][p.elementId[y]]][p.code[x][k]]--;
+                frontierP.add(y);
             }
         }
+        frontierP.remove(x);
     }
 
     /** Reverses {@link #assign} (u and x already freed in the arrays). */
@@ -165,32 +173,72 @@ final class Bounds {
             mappedNbrR[v]--;
             if (map[v] < 0) {
                 residualR[pairType[r.elementId[u]][r.elementId[v]]][r.code[u][k]]++;
+                if (mappedNbrR[v] == 0) {
+                    frontierR.remove(v);
+                }
             }
+        }
+        if (mappedNbrR[u] > 0) {
+            frontierR.add(u);
         }
         for (int k = 0; k < p.nbr[x].length; k++) {
             int y = p.nbr[x][k];
             usedNbrP[y]--;
             if (inv[y] < 0) {
                 residualP[pairType[p.elementId[x]][p.elementId[y]]][p.code[x][k]]++;
+                if (usedNbrP[y] == 0) {
+                    frontierP.remove(y);
+                }
             }
+        }
+        if (usedNbrP[x] > 0) {
+            frontierP.add(x);
         }
     }
 
-    /** Lower bound on the cost of all pairs not yet fully mapped; order[from..] are unmapped. */
-    int bound(int[] map, int[] inv, int[] order, int from) {
+    /** Lower bound on the cost of all pairs not yet fully mapped. */
+    int bound(int[] map, int[] inv) {
         int total = unmappedPairs();
-        for (int i = from; i < order.length; i++) {
-            int u = order[i];
-            if (mappedNbrR[u] > 0) {
-                total += crossReactant(map, inv, u);
-            }
+        for (int i = 0; i < frontierR.size; i++) {
+            total += crossReactant(map, inv, frontierR.items[i]);
         }
-        for (int x = 0; x < p.n; x++) {
-            if (inv[x] < 0 && usedNbrP[x] > 0) {
-                total += crossProduct(map, inv, x);
-            }
+        for (int i = 0; i < frontierP.size; i++) {
+            total += crossProduct(map, inv, frontierP.items[i]);
         }
         return total;
+    }
+
+    /**
+     * The unmapped atoms with at least one mapped neighbour, as a set with O(1) add and remove.
+     * Iteration order depends on history, which is harmless: only sums are taken over it.
+     */
+    private static final class Frontier {
+        final int[] items;
+        final int[] position;
+        int size;
+
+        Frontier(int n) {
+            items = new int[n];
+            position = new int[n];
+            java.util.Arrays.fill(position, -1);
+        }
+
+        void add(int a) {
+            if (position[a] < 0) {
+                position[a] = size;
+                items[size++] = a;
+            }
+        }
+
+        void remove(int a) {
+            int at = position[a];
+            if (at >= 0) {
+                int last = items[--size];
+                items[at] = last;
+                position[last] = at;
+                position[a] = -1;
+            }
+        }
     }
 
     private int unmappedPairs() {

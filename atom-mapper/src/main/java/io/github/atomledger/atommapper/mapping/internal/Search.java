@@ -27,8 +27,8 @@ import java.util.Set;
  */
 public final class Search {
 
-    /** Raw carbon assignments kept in phase 2 before the enumeration stops. */
-    static final int RAW_CAP = 256;
+    /** Distinct carbon symmetry classes collected in phase 2 before the enumeration stops. */
+    static final int CLASS_CAP = 64;
 
     final SideGraph r;
     final SideGraph p;
@@ -39,11 +39,13 @@ public final class Search {
     private final int carbonDone;
     private final int[] pin;
     private final boolean[] pinnedP;
+    private final boolean pinned;
     private final int[][] candidatesByElement;
     private final int[] twinRep;
     private final boolean[] orbitRep;
     private final int[] sameMolecule;
     private final Ordering ordering;
+    private final LocalSearch polish;
     private final long deadline;
     private final long nodeLimit;
 
@@ -65,7 +67,10 @@ public final class Search {
     private final Set<String> seenCarbon = new HashSet<>();
     private final Map<String, int[]> carbonMaps = new LinkedHashMap<>();
 
-    /** Prepares a search; {@code pin[u]} is the forced image of reactant atom u or -1. */
+    /**
+     * Prepares a search; {@code pin[u]} is the forced image of reactant atom u or -1. The time
+     * budget is counted in CPU time of the calling thread (see {@link SearchClock}).
+     */
     public Search(SideGraph r, SideGraph p, MappingOptions options, int[] pin, long deadlineNanos) {
         this.r = r;
         this.p = p;
@@ -73,16 +78,20 @@ public final class Search {
         this.deadline = deadlineNanos;
         this.nodeLimit = options.nodeLimit();
         this.bounds = new Bounds(r, p, options);
+        this.polish = new LocalSearch(r, p, options, pin);
         this.map = new int[r.n];
         this.inv = new int[p.n];
         Arrays.fill(map, -1);
         Arrays.fill(inv, -1);
         pinnedP = new boolean[p.n];
+        boolean any = false;
         for (int x : pin) {
             if (x >= 0) {
                 pinnedP[x] = true;
+                any = true;
             }
         }
+        pinned = any;
         int elements = 0;
         for (int e : r.elementId) {
             elements = Math.max(elements, e + 1);
@@ -137,7 +146,7 @@ public final class Search {
 
     /**
      * Runs phase 2 at the proven optimal cost; returns true when the enumeration finished (false:
-     * budget or {@link #RAW_CAP} reached).
+     * budget or {@link #CLASS_CAP} reached).
      */
     public boolean enumerateCoOptimal() {
         enumerate = true;
@@ -166,7 +175,7 @@ public final class Search {
         return stop ? Math.max(root, Math.min(openMin, upper)) : upper;
     }
 
-    /** Complete co-optimal maps from phase 2, one per distinct raw carbon assignment, in finding order. */
+    /** Complete co-optimal maps from phase 2, one per carbon symmetry class, in finding order. */
     public List<int[]> coOptimal() {
         return new ArrayList<>(carbonMaps.values());
     }
@@ -178,11 +187,11 @@ public final class Search {
 
     private void dfs(int depth, int g) {
         nodes++;
-        if ((nodes & 255) == 0 && (best != null || enumerate) && (nodes > nodeLimit || System.nanoTime() > deadline)) {
+        if ((nodes & 255) == 0 && (best != null || enumerate) && (nodes > nodeLimit || SearchClock.now() > deadline)) {
             stop = true;
         }
         if (stop) {
-            openMin = Math.min(openMin, g + bounds.bound(map, inv, order, depth));
+            openMin = Math.min(openMin, g + bounds.bound(map, inv));
             return;
         }
         if (depth == r.n) {
@@ -211,7 +220,7 @@ public final class Search {
                 break;
             }
             assign(u, x);
-            int lb = g + delta + bounds.bound(map, inv, order, depth + 1);
+            int lb = g + delta + bounds.bound(map, inv);
             if (!cut(lb)) {
                 dfs(depth + 1, g + delta);
             }
@@ -236,6 +245,10 @@ public final class Search {
     }
 
     private boolean symmetric(int x) {
+        // Pins single out atoms, so the product's symmetries are no longer symmetries of the problem.
+        if (pinned) {
+            return false;
+        }
         int twin = twinRep[x];
         if (twin != x && inv[twin] < 0) {
             return true;
@@ -264,16 +277,32 @@ public final class Search {
         if (!seenCarbon.add(raw)) {
             return;
         }
+        // A carbon assignment in a symmetry class that already has an optimal completion adds
+        // nothing: only the first of each class is completed.
+        String cls = classKey(depth);
+        if (carbonMaps.containsKey(cls)) {
+            return;
+        }
         completing = true;
         completed = false;
         dfs(depth, g);
         if (completed) {
-            carbonMaps.put(raw, completedMap);
-            if (carbonMaps.size() >= RAW_CAP) {
+            carbonMaps.put(cls, completedMap);
+            if (carbonMaps.size() >= CLASS_CAP) {
                 stop = true;
             }
         }
         completing = false;
+    }
+
+    private String classKey(int depth) {
+        long[] pairs = new long[depth];
+        for (int k = 0; k < depth; k++) {
+            int u = order[k];
+            pairs[k] = ((long) r.orbitKey[u] << 32) | p.orbitKey[map[u]];
+        }
+        Arrays.sort(pairs);
+        return Arrays.toString(pairs);
     }
 
     private void leaf(int g) {
@@ -281,8 +310,8 @@ public final class Search {
             completed = true;
             completedMap = map.clone();
         } else if (g < upper) {
-            upper = g;
             best = map.clone();
+            upper = polish.improve(best, g);
         }
     }
 

@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.SortedSet;
+import java.util.function.Supplier;
 import org.openscience.cdk.aromaticity.Aromaticity;
 import org.openscience.cdk.aromaticity.ElectronDonation;
 import org.openscience.cdk.exception.CDKException;
@@ -24,20 +25,22 @@ import org.openscience.cdk.smiles.SmilesGenerator;
 /**
  * Turns a parsed CDK container into the heavy-atom arrays of a {@code MoleculeGraph}, its
  * automorphism classes and canonical SMILES. Works on copies only; the input is not changed.
+ * The automorphism classes and the canonical SMILES are computed on first use: they cost
+ * milliseconds per molecule (partition refinement; InChI labelling for stereo), and a run that
+ * takes every map from the cache never needs the classes.
  */
-public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCodes, int[] orbits,
-                           int[] hydrogens, int[] heavyToAtom, String canonicalSmiles) {
+public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCodes, Supplier<int[]> orbits,
+                           int[] hydrogens, int[] heavyToAtom, Supplier<String> canonicalSmiles) {
 
-    /** Aromaticity as in Daylight SMILES; cycles up to size 6 keep large ring systems cheap. */
-    private static final Aromaticity AROMATICITY = new Aromaticity(ElectronDonation.daylight(),
-            Cycles.or(Cycles.all(), Cycles.all(6)));
 
     /** Builds the arrays from {@code parsed}; {@code source} only names the input in errors. */
     public static GraphBuilder build(IAtomContainer parsed, String source) throws StructureException {
         IAtomContainer mol;
         try {
             mol = parsed.clone();
-            AROMATICITY.apply(mol);
+            // Aromaticity as in Daylight SMILES; made per call so that no CDK object is shared
+            // between threads. Cycles up to size 6 are the fallback for large ring systems.
+            new Aromaticity(ElectronDonation.daylight(), Cycles.or(Cycles.all(), Cycles.all(6))).apply(mol);
         } catch (CloneNotSupportedException | CDKException e) {
             throw new StructureException("cannot perceive aromaticity in '" + source + "': "
                     + e.getMessage(), e);
@@ -98,6 +101,13 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
             neighbours[k] = list.stream().mapToInt(e -> e[0]).toArray();
             codes[k] = list.stream().mapToInt(e -> e[1]).toArray();
         }
+        Supplier<int[]> orbits = new Lazy<>(() -> orbits(symmetryCopy, n));
+        Supplier<String> canonical = new Lazy<>(() -> canonicalOf(mol, source));
+        return new GraphBuilder(elements, neighbours, codes, orbits, hydrogens,
+                heavy.stream().mapToInt(Integer::intValue).toArray(), canonical);
+    }
+
+    private static int[] orbits(IAtomContainer symmetryCopy, int n) {
         int[] orbits = new int[n];
         Arrays.setAll(orbits, i -> i);
         if (n > 1) {
@@ -110,17 +120,18 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
                 }
             }
         }
+        return orbits;
+    }
+
+    private static String canonicalOf(IAtomContainer mol, String source) {
         String canonical = canonical(mol, SmiFlavor.Absolute | SmiFlavor.UseAromaticSymbols);
         if (canonical == null) {
             // CDK labels stereo through InChI, which refuses some inputs (a bare proton, for
             // one); the constitution alone is canonical enough for a fingerprint then.
             canonical = canonical(mol, SmiFlavor.Canonical | SmiFlavor.UseAromaticSymbols);
         }
-        if (canonical == null) {
-            throw new StructureException("cannot write canonical SMILES for '" + source + "'");
-        }
-        return new GraphBuilder(elements, neighbours, codes, orbits, hydrogens,
-                heavy.stream().mapToInt(Integer::intValue).toArray(), canonical);
+        // Last resort, never seen on real input: the input text, which is at least deterministic.
+        return canonical != null ? canonical : "input:" + source;
     }
 
     private static String canonical(IAtomContainer mol, int flavor) {

@@ -18,7 +18,9 @@ import java.util.TreeSet;
  * {@code mapping.stale}: a map stored in the model was written for structures that have changed
  * since (their fingerprints differ from the structures used now), so its atom numbers may no
  * longer mean the same atoms. Re-run {@code annotate} (inferred maps) or review the curated map.
- * Data: {@code species} (comma list), {@code origin}.
+ * The same molecule written as another SMILES counts too, because atom numbers follow the SMILES
+ * text. Data: {@code species} (comma list), {@code origin}, {@code reason} ("structure-changed"
+ * or "renumbered").
  */
 public final class StaleMapCheck implements ModelCheck {
 
@@ -46,23 +48,30 @@ public final class StaleMapCheck implements ModelCheck {
                 continue;
             }
             TreeSet<String> changed = new TreeSet<>();
+            TreeSet<String> renumbered = new TreeSet<>();
             for (StoredStructure s : a.structures()) {
-                if (s.fingerprint().isEmpty()) {
-                    continue;
-                }
-                String now = context.mapping().structures().get(s.species())
-                        .map(SpeciesStructures.Resolved::structure).map(x -> x.fingerprint()).orElse("");
-                if (!now.equals(s.fingerprint())) {
+                SpeciesStructures.Resolved now = context.mapping().structures().get(s.species()).orElse(null);
+                String fingerprint = now == null ? "" : now.structure().fingerprint();
+                if (!s.fingerprint().isEmpty() && !fingerprint.equals(s.fingerprint())) {
                     changed.add(s.species());
+                } else if (now != null && !s.smiles().isEmpty() && !s.smiles().strip().equals(now.text().strip())) {
+                    // Same molecule, other SMILES text: atom numbers follow the text, so they may have moved.
+                    renumbered.add(s.species());
                 }
             }
-            if (changed.isEmpty()) {
+            if (changed.isEmpty() && renumbered.isEmpty()) {
                 continue;
             }
+            TreeSet<String> all = new TreeSet<>(changed);
+            all.addAll(renumbered);
+            String why = !changed.isEmpty()
+                    ? "was written for other structures of " + String.join(", ", changed) + "; the structure changed since"
+                    : "was written for another SMILES of " + String.join(", ", renumbered)
+                            + " (the same molecule), so its atom numbers may have moved";
             out.add(context.finding(this, r.id(), r.line(), "The " + a.origin() + " atom map of reaction " + r.id()
-                    + " was written for other structures of " + String.join(", ", changed)
-                    + "; the structure changed since the map was written.",
-                    Map.of("species", String.join(",", changed), "origin", a.origin())));
+                    + " " + why + ".",
+                    Map.of("species", String.join(",", all), "origin", a.origin(),
+                            "reason", changed.isEmpty() ? "renumbered" : "structure-changed")));
         }
         return out;
     }

@@ -20,13 +20,15 @@ import org.junit.jupiter.api.Test;
 /** Curated aldolase maps; the fixture's header gives the published carbon fates and atom numbers. */
 class CuratedMapCheckTest {
 
+    private static final MappingOptions OPTIONS = MappingOptions.defaults().withTimeBudget(java.time.Duration.ofSeconds(60));
+
     private static ModelResult result;
 
     @BeforeAll
     static void run() throws URISyntaxException {
         Path dir = Path.of(CuratedMapCheckTest.class.getResource("fba-curated.xml").toURI()).getParent();
         RunConfig config = RunConfig.defaults(dir, List.of("fba-curated.xml"))
-                .withMapping(new MappingConfig(true, dir.resolve("fba-structures.tsv"), MappingOptions.defaults(), 2, null));
+                .withMapping(new MappingConfig(true, dir.resolve("fba-structures.tsv"), OPTIONS, 2, null));
         result = new Engine().run(config, RunListener.SILENT).models().get(0);
     }
 
