@@ -4,6 +4,8 @@ import io.github.atomledger.checker.AtomLedgerException;
 import io.github.atomledger.checker.engine.Engine;
 import io.github.atomledger.checker.engine.RunConfig;
 import io.github.atomledger.checker.engine.RunResult;
+import io.github.atomledger.checker.gate.Gate;
+import io.github.atomledger.checker.gate.GateConfig;
 import io.github.atomledger.checker.report.ConsoleSummary;
 import io.github.atomledger.checker.report.Reporters;
 
@@ -82,6 +84,32 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter
     private Map<String, String> classSeverities;
 
+    /**
+     * The baseline of accepted findings (see {@code docs/gating.md}): findings listed there with a
+     * reason are reported as accepted and do not fail the build; entries that match nothing are
+     * reported as {@code model.baseline-stale}. Default {@code models/atomledger-baseline.tsv}, used
+     * when it exists; a file named here must exist. Example: {@code -Datomledger.baseline=models/baseline.tsv}.
+     */
+    @Parameter(property = "atomledger.baseline")
+    private File baseline;
+
+    /**
+     * The previous release's models, for the release diff: a directory holding them under the same
+     * relative paths as the current ones, or one file when one model is checked. Default: no diff.
+     * Example: {@code -Datomledger.previousModels=target/previous} after
+     * {@code git archive v1.3 models | tar -x -C target/previous}.
+     */
+    @Parameter(property = "atomledger.previousModels")
+    private File previousModels;
+
+    /**
+     * Which findings may fail the build: {@code findings} (every finding at or above
+     * {@code failOnSeverity} not accepted in the baseline) or {@code regressions} (only the release
+     * diff's findings; needs {@code previousModels}). Default {@code findings}.
+     */
+    @Parameter(property = "atomledger.failOn", defaultValue = "findings")
+    private String failOn;
+
     /** The most bytes of XML read from one model file, after gzip decompression. Default 1 GiB. */
     @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1073741824")
     private long maxModelBytes;
@@ -136,10 +164,13 @@ public final class CheckMojo extends AbstractMojo {
                 severities, classSeverities, maxModelBytes)
                 .withMapping(ConfigMapper.mapping(mapping, baseDirectory, structures, threads, cacheDirectory,
                         mappingTimeBudget, maxHeavyAtoms));
+        GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
         List<Path> written;
         try {
-            result = new Engine().run(config, new MavenRunListener(getLog()));
+            Engine engine = new Engine();
+            MavenRunListener listener = new MavenRunListener(getLog());
+            result = Gate.standard(engine, config.maxModelBytes()).apply(engine.run(config, listener), gate, listener);
             written = Reporters.forFormats(config.formats()).write(result, config.reportDirectory());
         } catch (AtomLedgerException e) {
             throw new MojoExecutionException(e.getMessage(), e);

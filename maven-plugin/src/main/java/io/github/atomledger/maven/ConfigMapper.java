@@ -8,6 +8,9 @@ import io.github.atomledger.checker.engine.MappingConfig;
 import io.github.atomledger.checker.engine.RunConfig;
 import io.github.atomledger.checker.engine.RunResult;
 import io.github.atomledger.checker.engine.SeverityPolicy;
+import io.github.atomledger.checker.gate.FailScope;
+import io.github.atomledger.checker.gate.Gate;
+import io.github.atomledger.checker.gate.GateConfig;
 import io.github.atomledger.checker.report.ReportFormat;
 
 import java.io.File;
@@ -19,6 +22,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import java.util.TreeSet;
 import org.apache.maven.plugin.MojoExecutionException;
 
 /** Turns Mojo parameters into a {@link RunConfig}; shared by the goals. */
@@ -47,9 +51,32 @@ final class ConfigMapper {
             Path base = baseDir.toPath().toAbsolutePath().normalize();
             Set<ReportFormat> fmt = ReportFormat.parseList(formats);
             SeverityPolicy policy = SeverityPolicy.of(severities == null ? Map.of() : severities,
-                    classSeverities == null ? Map.of() : classSeverities, StandardChecks.all());
+                    classSeverities == null ? Map.of() : classSeverities, knownRuleIds());
             return new RunConfig(base, patterns, reportDirectory.toPath().toAbsolutePath().normalize(),
                     failOn(failOnSeverity), fmt, policy, maxModelBytes, MappingConfig.OFF);
+        } catch (IllegalArgumentException e) {
+            throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
+        }
+    }
+
+    /** Every rule id a severity may be set for: the checks' and the release gate's. */
+    static Set<String> knownRuleIds() {
+        Set<String> ids = new TreeSet<>(Gate.ruleIds());
+        StandardChecks.all().forEach(c -> ids.add(c.ruleId()));
+        return ids;
+    }
+
+    /**
+     * The release gate's configuration. A baseline named explicitly must exist; without one,
+     * {@value GateConfig#DEFAULT_BASELINE} is used when it exists.
+     */
+    static GateConfig toGate(File baseDir, File baseline, File previousModels, String failOn)
+            throws MojoExecutionException {
+        try {
+            Path base = baseDir.toPath().toAbsolutePath().normalize();
+            Path file = baseline == null ? base.resolve(GateConfig.DEFAULT_BASELINE) : base.resolve(baseline.toPath());
+            Path previous = previousModels == null ? null : base.resolve(previousModels.toPath()).normalize();
+            return new GateConfig(file.normalize(), baseline != null, previous, FailScope.parse(failOn));
         } catch (IllegalArgumentException e) {
             throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
         }

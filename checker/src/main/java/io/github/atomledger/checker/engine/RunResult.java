@@ -12,11 +12,19 @@ import java.util.Map;
  *
  * @param config the configuration that produced it
  * @param models one result per model file
+ * @param gate   baseline statuses and fail scope from the release gate ({@link GateMarks#NONE} when
+ *               no gate was applied)
  */
-public record RunResult(RunConfig config, List<ModelResult> models) {
+public record RunResult(RunConfig config, List<ModelResult> models, GateMarks gate) {
 
     public RunResult {
         models = models.stream().sorted(java.util.Comparator.comparing(ModelResult::file)).toList();
+        gate = gate == null ? GateMarks.NONE : gate;
+    }
+
+    /** A result without gate marks. */
+    public RunResult(RunConfig config, List<ModelResult> models) {
+        this(config, models, GateMarks.NONE);
     }
 
     /** Every finding of the run, in {@link Finding#ORDER}. */
@@ -34,12 +42,15 @@ public record RunResult(RunConfig config, List<ModelResult> models) {
         return counts;
     }
 
-    /** Findings at or above the fail threshold; empty when the run never fails. */
+    /**
+     * Findings at or above the fail threshold that the gate lets fail (not accepted in the
+     * baseline, within the fail scope); empty when the run never fails.
+     */
     public List<Finding> failing() {
         Severity threshold = config.failOn();
         if (threshold == null) {
             return List.of();
         }
-        return allFindings().stream().filter(f -> f.severity().atLeast(threshold)).toList();
+        return allFindings().stream().filter(f -> f.severity().atLeast(threshold)).filter(gate::mayFail).toList();
     }
 }

@@ -59,6 +59,18 @@ public final class SeverityPolicy {
     public static SeverityPolicy of(Map<String, String> byRule, Map<String, String> byClass, List<ModelCheck> checks) {
         Set<String> known = new TreeSet<>();
         checks.forEach(c -> known.add(c.ruleId()));
+        return of(byRule, byClass, known);
+    }
+
+    /**
+     * A policy with overrides, validated against known rule ids (the checks' and, for example,
+     * the release gate's own rules).
+     *
+     * @throws IllegalArgumentException naming the unknown rule id (listing the known ones), class
+     *         or severity
+     */
+    public static SeverityPolicy of(Map<String, String> byRule, Map<String, String> byClass, Set<String> knownRuleIds) {
+        Set<String> known = new TreeSet<>(knownRuleIds);
         Map<String, String> rules = new TreeMap<>();
         byRule.forEach((rule, value) -> {
             String r = rule.strip();

@@ -15,7 +15,8 @@ import java.util.TreeMap;
 
 /**
  * The console text of a run: one summary line per model, then one line per reaction with a
- * finding at or above the fail threshold, showing its imbalance ({@code R_PFK  C -20  charge ?}).
+ * finding at or above the fail threshold that the release gate lets fail (not accepted in the
+ * baseline, within the fail scope), showing its imbalance ({@code R_PFK  C -20  charge ?}).
  * Plain text by default; {@link #lines(RunResult, boolean)} adds ANSI colour (severity counts
  * and reaction ids) for a terminal, and {@link #colourWanted} is the rule for when to ask for it.
  */
@@ -62,7 +63,8 @@ public final class ConsoleSummary {
             int shown = 0;
             int hidden = 0;
             for (ReactionResult r : m.reactions()) {
-                List<Finding> bad = r.findings().stream().filter(f -> f.severity().atLeast(threshold)).toList();
+                List<Finding> bad = r.findings().stream().filter(f -> f.severity().atLeast(threshold))
+                        .filter(result.gate()::mayFail).toList();
                 if (bad.isEmpty()) {
                     continue;
                 }
@@ -77,7 +79,7 @@ public final class ConsoleSummary {
                 out.add("  ... and " + hidden + " more reaction(s); see the report");
             }
             for (Finding f : m.modelFindings()) {
-                if (f.severity().atLeast(threshold)) {
+                if (f.severity().atLeast(threshold) && result.gate().mayFail(f)) {
                     out.add("  " + f.elementId() + "  [" + f.ruleId() + "] " + f.message());
                 }
             }

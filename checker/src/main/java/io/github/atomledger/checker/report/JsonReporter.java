@@ -5,9 +5,12 @@ import io.github.atomledger.atommapper.mapping.AtomRef;
 import io.github.atomledger.atommapper.mapping.AtomTransition;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.Version;
+import io.github.atomledger.checker.baseline.BaselineMatch;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.check.balance.ReactionBalance;
+import io.github.atomledger.checker.engine.BaselineStatus;
+import io.github.atomledger.checker.engine.GateMarks;
 import io.github.atomledger.checker.engine.ModelResult;
 import io.github.atomledger.checker.engine.ReactionResult;
 import io.github.atomledger.checker.engine.RunResult;
@@ -69,7 +72,7 @@ public final class JsonReporter implements Reporter {
         root.put("summary", summary(result));
         List<Object> models = new ArrayList<>();
         for (ModelResult m : result.models()) {
-            models.add(model(m));
+            models.add(model(m, result.gate()));
         }
         root.put("models", models);
         return root;
@@ -82,7 +85,27 @@ public final class JsonReporter implements Reporter {
         s.put("findings", severityCounts(result.allFindings()));
         s.put("failOn", result.config().failOn() == null ? "none" : result.config().failOn().label());
         s.put("failed", !result.failing().isEmpty());
+        if (result.gate() != GateMarks.NONE) {
+            s.put("gate", gate(result));
+        }
         return s;
+    }
+
+    /** The release gate's summary: fail scope and baseline counts (present only when gating). */
+    private static Map<String, Object> gate(RunResult result) {
+        GateMarks g = result.gate();
+        Map<String, Object> o = new LinkedHashMap<>();
+        o.put("failOn", g.onlyRules().isEmpty() ? "findings" : "regressions");
+        if (g.hasBaseline()) {
+            Map<String, Object> b = new LinkedHashMap<>();
+            b.put("file", g.baselineFile());
+            for (BaselineStatus st : BaselineStatus.values()) {
+                b.put(st.label(), g.baseline().values().stream().filter(v -> v == st).count());
+            }
+            b.put("stale", result.allFindings().stream().filter(f -> f.ruleId().equals(BaselineMatch.STALE_RULE)).count());
+            o.put("baseline", b);
+        }
+        return o;
     }
 
     static Map<String, Object> severityCounts(List<Finding> findings) {
@@ -93,7 +116,7 @@ public final class JsonReporter implements Reporter {
         return c;
     }
 
-    private static Map<String, Object> model(ModelResult m) {
+    private static Map<String, Object> model(ModelResult m, GateMarks gate) {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("file", m.file());
         o.put("modelId", m.model().modelId());
@@ -121,16 +144,16 @@ public final class JsonReporter implements Reporter {
             summary.put("mapping", null);
         }
         o.put("summary", summary);
-        o.put("findings", findings(m.modelFindings()));
+        o.put("findings", findings(m.modelFindings(), gate));
         List<Object> reactions = new ArrayList<>();
         for (ReactionResult r : m.reactions()) {
-            reactions.add(reaction(r));
+            reactions.add(reaction(r, gate));
         }
         o.put("reactions", reactions);
         return o;
     }
 
-    private static Map<String, Object> reaction(ReactionResult r) {
+    private static Map<String, Object> reaction(ReactionResult r, GateMarks gate) {
         Map<String, Object> o = new LinkedHashMap<>();
         ReactionBalance b = r.balance();
         o.put("id", r.id());
@@ -150,7 +173,7 @@ public final class JsonReporter implements Reporter {
         balance.put("charge", b.charge() == null ? null : b.charge().toString());
         o.put("balance", balance);
         o.put("mapping", r.mapping() == null ? null : mapping(r.mapping()));
-        o.put("findings", findings(r.findings()));
+        o.put("findings", findings(r.findings(), gate));
         return o;
     }
 
@@ -194,6 +217,11 @@ public final class JsonReporter implements Reporter {
     }
 
     static List<Object> findings(List<Finding> findings) {
+        return findings(findings, GateMarks.NONE);
+    }
+
+    /** Findings with their {@code baseline} status when a baseline was applied. */
+    static List<Object> findings(List<Finding> findings, GateMarks gate) {
         List<Object> out = new ArrayList<>();
         for (Finding f : findings) {
             Map<String, Object> o = new LinkedHashMap<>();
@@ -204,6 +232,7 @@ public final class JsonReporter implements Reporter {
             o.put("line", f.line());
             o.put("message", f.message());
             o.put("data", new TreeMap<>(f.data()));
+            gate.status(f).ifPresent(st -> o.put("baseline", st.label()));
             out.add(o);
         }
         return out;

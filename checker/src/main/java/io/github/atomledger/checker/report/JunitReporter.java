@@ -2,6 +2,7 @@ package io.github.atomledger.checker.report;
 
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.engine.GateMarks;
 import io.github.atomledger.checker.engine.ModelResult;
 import io.github.atomledger.checker.engine.ReactionResult;
 import io.github.atomledger.checker.engine.RunResult;
@@ -19,7 +20,8 @@ import javax.xml.stream.XMLStreamException;
  * {@code <testsuite>} per model, one {@code <testcase>} per reaction and check family
  * (classname {@code <model>.<family>}, name the reaction id), and one per species or model with
  * model-level findings. A case fails when it has findings at or above the fail threshold
- * ({@code error} when the run never fails); each failure carries the messages. Lower findings go
+ * ({@code error} when the run never fails) that the release gate lets fail (not accepted in the
+ * baseline, within the fail scope); each failure carries the messages. Lower findings go
  * to the case's {@code <system-out>}. Balance cases of reactions whose class is not balance-checked
  * (exchange, demand, sink) are {@code <skipped>} unless they have a failing finding. Times are always 0 so the file is byte-stable.
  */
@@ -46,7 +48,7 @@ public final class JunitReporter implements Reporter {
             Severity threshold = Families.threshold(result);
             List<Suite> suites = new ArrayList<>();
             for (ModelResult m : result.models()) {
-                suites.add(suite(m, threshold));
+                suites.add(suite(m, threshold, result.gate()));
             }
             XmlOut x = new XmlOut().declaration();
             x.start("testsuites").attr("name", "AtomLedger")
@@ -78,7 +80,7 @@ public final class JunitReporter implements Reporter {
         }
     }
 
-    private static Suite suite(ModelResult m, Severity threshold) {
+    private static Suite suite(ModelResult m, Severity threshold, GateMarks gate) {
         String stem = stem(m.file());
         List<String> families = Families.inRun(m.allFindings());
         List<Case> cases = new ArrayList<>();
@@ -87,10 +89,10 @@ public final class JunitReporter implements Reporter {
                 List<Finding> mine = r.findings().stream().filter(f -> Families.of(f.ruleId()).equals(family)).toList();
                 String skipped = null;
                 if (family.equals("balance") && !r.reactionClass().balanceComputed()
-                        && mine.stream().noneMatch(f -> f.severity().atLeast(threshold))) {
+                        && mine.stream().noneMatch(f -> f.severity().atLeast(threshold) && gate.mayFail(f))) {
                     skipped = r.reactionClass().label() + " reaction: balance is not checked for this class";
                 }
-                cases.add(newCase(stem + "." + family, r.id(), mine, threshold, skipped));
+                cases.add(newCase(stem + "." + family, r.id(), mine, threshold, gate, skipped));
             }
         }
         Map<String, Map<String, List<Finding>>> byElement = new TreeMap<>();
@@ -99,14 +101,15 @@ public final class JunitReporter implements Reporter {
                     .computeIfAbsent(Families.of(f.ruleId()), k -> new ArrayList<>()).add(f);
         }
         byElement.forEach((element, perFamily) -> perFamily.forEach((family, list) ->
-                cases.add(newCase(stem + "." + family, element, list, threshold, null))));
+                cases.add(newCase(stem + "." + family, element, list, threshold, gate, null))));
         return new Suite(m, cases);
     }
 
     private static Case newCase(String classname, String name, List<Finding> findings, Severity threshold,
-                                String skipped) {
-        List<Finding> failing = findings.stream().filter(f -> f.severity().atLeast(threshold)).toList();
-        List<Finding> other = findings.stream().filter(f -> !f.severity().atLeast(threshold)).toList();
+                                GateMarks gate, String skipped) {
+        List<Finding> failing = findings.stream().filter(f -> f.severity().atLeast(threshold) && gate.mayFail(f))
+                .toList();
+        List<Finding> other = findings.stream().filter(f -> !failing.contains(f)).toList();
         return new Case(classname, name, failing, other, skipped);
     }
 

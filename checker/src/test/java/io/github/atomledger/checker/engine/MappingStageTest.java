@@ -46,7 +46,13 @@ class MappingStageTest {
         Map<String, MapStatus> status = m.reactions().stream()
                 .collect(Collectors.toMap(ReactionResult::id, r -> r.mapping().status()));
         assertThat(status).containsEntry("R_EX_glc", MapStatus.SKIPPED).containsEntry("R_GROWTH", MapStatus.SKIPPED)
-                .containsEntry("R_PPC", MapStatus.MAPPED).containsEntry("R_CS", MapStatus.MAPPED);
+                .containsEntry("R_PPC", MapStatus.MAPPED).containsEntry("R_CS", MapStatus.MAPPED)
+                .containsEntry("R_ALAT", MapStatus.MAPPED);
+        // Transamination keeps both carbon skeletons (common practice): alanine's three carbons
+        // become pyruvate's, 2-oxoglutarate's five become glutamate's.
+        ReactionMapping alat = m.reactions().stream().filter(r -> r.id().equals("R_ALAT")).findFirst().orElseThrow().mapping();
+        assertThat(alat.carbons()).allSatisfy(t -> assertThat(t.to().species())
+                .isEqualTo(t.from().species().equals("ala_c") ? "pyr_c" : "glu_c"));
         // Phosphoenolpyruvate carboxylase: PEP C1-C3 become OAA C1-C3 and CO2 becomes OAA C4
         // (textbook anaplerosis; from memory). Atom numbers are SMILES positions in structures.tsv.
         ReactionMapping ppc = m.reactions().stream().filter(r -> r.id().equals("R_PPC")).findFirst().orElseThrow().mapping();
@@ -78,6 +84,6 @@ class MappingStageTest {
             }
         }
         ModelResult m = new Engine().run(config(2, cache), RunListener.SILENT).models().get(0);
-        assertThat(m.reactions().stream().filter(r -> r.mapping().status() == MapStatus.MAPPED).count()).isEqualTo(34);
+        assertThat(m.reactions().stream().filter(r -> r.mapping().status() == MapStatus.MAPPED).count()).isEqualTo(35);
     }
 }
