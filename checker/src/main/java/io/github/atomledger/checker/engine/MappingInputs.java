@@ -64,7 +64,6 @@ final class MappingInputs {
         }
         List<io.github.atomledger.atommapper.mapping.Participant> in = new ArrayList<>();
         List<io.github.atomledger.atommapper.mapping.Participant> out = new ArrayList<>();
-        Map<String, String> fingerprints = new TreeMap<>();
         StringBuilder canonical = new StringBuilder();
         for (int side = 0; side < 2; side++) {
             Map<String, Integer> m = side == 0 ? reactants : products;
@@ -73,15 +72,14 @@ final class MappingInputs {
             m.forEach((species, n) -> {
                 SpeciesStructures.Resolved s = structures.get(species).orElseThrow();
                 list.add(new io.github.atomledger.atommapper.mapping.Participant(species, s.structure(), n));
-                fingerprints.put(species, s.structure().fingerprint());
             });
             new TreeMap<>(m).forEach((species, n) -> canonical.append(species).append('*').append(n).append('*')
                     .append(structures.get(species).orElseThrow().structure().source()).append('|'));
         }
-        return new MappingStage.Prepared(new ReactionInput(r.id(), in, out), canonical.toString(), fingerprints, null);
+        return new MappingStage.Prepared(new ReactionInput(r.id(), in, out), canonical.toString(), null);
     }
 
     private static MappingStage.Prepared early(ReactionMapping m) {
-        return new MappingStage.Prepared(null, "", Map.of(), m);
+        return new MappingStage.Prepared(null, "", m);
     }
 }

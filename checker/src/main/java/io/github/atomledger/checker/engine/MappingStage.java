@@ -96,7 +96,7 @@ final class MappingStage {
                 results.put(r.id(), hit);
             } else {
                 results.put(r.id(), null);
-                jobs.add(new Job(r.id(), p.input(), key, p.fingerprints()));
+                jobs.add(new Job(r.id(), p.input(), key));
             }
         }
         runJobs(model.file(), jobs, results);
@@ -111,11 +111,11 @@ final class MappingStage {
         return new MappingData(true, results, curated, stored, structures);
     }
 
-    private record Job(String reactionId, ReactionInput input, String key, Map<String, String> fingerprints) {
+    private record Job(String reactionId, ReactionInput input, String key) {
     }
 
     /** A reaction ready for the mapper, or the result that makes mapping unnecessary. */
-    record Prepared(ReactionInput input, String canonical, Map<String, String> fingerprints, ReactionMapping early) {
+    record Prepared(ReactionInput input, String canonical, ReactionMapping early) {
     }
 
     private void runJobs(String file, List<Job> jobs, Map<String, ReactionMapping> results) {
@@ -136,7 +136,7 @@ final class MappingStage {
             List<Future<ReactionMapping>> futures = new ArrayList<>();
             for (Job j : jobs) {
                 futures.add(pool.submit(() -> {
-                    ReactionMapping m = toMapping(mapper.map(j.input()), j.fingerprints());
+                    ReactionMapping m = toMapping(mapper.map(j.input()), fingerprints(j.input()));
                     counts.get(m.status()).incrementAndGet();
                     done.incrementAndGet();
                     return m;
@@ -185,6 +185,18 @@ final class MappingStage {
             }
         }
         return sb.append(")").append(left < 0 ? "" : ", about " + left + " s left").toString();
+    }
+
+    /**
+     * Fingerprints of the structures a reaction was mapped from; computed only for reactions that
+     * are mapped now (a cached result carries its own), because a stereo-aware canonical form
+     * costs milliseconds per molecule.
+     */
+    private static Map<String, String> fingerprints(ReactionInput input) {
+        Map<String, String> out = new TreeMap<>();
+        input.reactants().forEach(p -> out.put(p.species(), p.structure().fingerprint()));
+        input.products().forEach(p -> out.put(p.species(), p.structure().fingerprint()));
+        return out;
     }
 
     static ReactionMapping toMapping(MappingResult r, Map<String, String> fingerprints) {
