@@ -1,0 +1,228 @@
+package io.github.atomledger.atommapper.structure;
+
+import io.github.atomledger.atommapper.formula.Formula;
+import io.github.atomledger.atommapper.structure.internal.GraphBuilder;
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import java.util.Locale;
+import java.util.Objects;
+import java.util.SortedMap;
+import java.util.TreeMap;
+import org.openscience.cdk.exception.CDKException;
+import org.openscience.cdk.exception.InvalidSmilesException;
+import org.openscience.cdk.inchi.InChIGeneratorFactory;
+import org.openscience.cdk.inchi.InChIToStructure;
+import org.openscience.cdk.interfaces.IAtom;
+import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.interfaces.IPseudoAtom;
+import org.openscience.cdk.silent.SilentChemObjectBuilder;
+import org.openscience.cdk.smiles.SmiFlavor;
+import org.openscience.cdk.smiles.SmilesGenerator;
+import org.openscience.cdk.smiles.SmilesParser;
+
+/**
+ * An immutable parsed molecule: its formula, net charge, canonical form and heavy-atom graph.
+ *
+ * <pre>{@code
+ * Structure pyruvate = Structure.fromSmiles("CC(=O)C(=O)[O-]");
+ * pyruvate.formula();        // C3H3O3
+ * pyruvate.charge();         // -1
+ * pyruvate.heavyAtomCount(); // 6
+ * }</pre>
+ *
+ * <p>Atom identity: heavy atom {@code k} (1-based) is the k-th non-hydrogen atom in the order of
+ * the input (SMILES string order; InChI's own numbering for {@link #fromInchi}). Explicit hydrogen
+ * atoms in the input count as hydrogens of the formula, never as atoms of the graph. A {@code *}
+ * atom is the pseudo-element "R".
+ *
+ * <p>Thread-safety: instances are immutable. The CDK container kept inside is never handed out
+ * and is copied before any CDK call that could change it. Arguments must not be null
+ * ({@link NullPointerException} otherwise).
+ *
+ * <p>Does not handle: stereo (kept in {@link #canonicalSmiles()} but ignored by the graph),
+ * polymers with repeat units, reaction SMILES.
+ */
+public final class Structure {
+
+    private final String source;
+    private final Formula formula;
+    private final int charge;
+    private final String canonicalSmiles;
+    private final String fingerprint;
+    private final MoleculeGraph graph;
+    private final IAtomContainer master;
+    private final int[] heavyToAtom;
+
+    private Structure(String source, IAtomContainer parsed) throws StructureException {
+        this.source = source;
+        this.master = parsed;
+        GraphBuilder built = GraphBuilder.build(parsed, source);
+        this.graph = new MoleculeGraph(built.elements(), built.neighbours(), built.bondCodes(),
+                built.orbits(), built.hydrogens());
+        this.heavyToAtom = built.heavyToAtom();
+        this.canonicalSmiles = built.canonicalSmiles();
+        this.fingerprint = "sha256:" + sha256(canonicalSmiles).substring(0, 16);
+        SortedMap<String, Long> counts = new TreeMap<>();
+        int q = 0;
+        for (IAtom atom : parsed.atoms()) {
+            String symbol = atom instanceof IPseudoAtom || atom.getAtomicNumber() == null
+                    || atom.getAtomicNumber() == 0 ? "R" : atom.getSymbol();
+            counts.merge(symbol, 1L, Long::sum);
+            Integer h = atom.getImplicitHydrogenCount();
+            if (h != null && h > 0) {
+                counts.merge("H", (long) h, Long::sum);
+            }
+            q += atom.getFormalCharge() == null ? 0 : atom.getFormalCharge();
+        }
+        this.formula = Formula.of(counts);
+        this.charge = q;
+    }
+
+    /**
+     * Parses a SMILES string (OpenSMILES; aromatic input is kekulised by CDK).
+     *
+     * @throws StructureException when the text is empty or not valid SMILES; the message quotes it
+     */
+    public static Structure fromSmiles(String smiles) throws StructureException {
+        Objects.requireNonNull(smiles, "smiles");
+        if (smiles.isBlank()) {
+            throw new StructureException("invalid SMILES '" + smiles + "': empty");
+        }
+        try {
+            SmilesParser parser = new SmilesParser(SilentChemObjectBuilder.getInstance());
+            return new Structure(smiles, parser.parseSmiles(smiles));
+        } catch (InvalidSmilesException e) {
+            throw new StructureException("invalid SMILES '" + smiles + "': " + firstLine(e), e);
+        }
+    }
+
+    /**
+     * Parses a standard or non-standard InChI through CDK's InChI bindings (a native library).
+     *
+     * @throws StructureException when the InChI is not valid, or when the native InChI library
+     *     cannot be loaded on this machine (the message then says so)
+     */
+    public static Structure fromInchi(String inchi) throws StructureException {
+        Objects.requireNonNull(inchi, "inchi");
+        InChIToStructure toStructure;
+        try {
+            toStructure = InChIGeneratorFactory.getInstance()
+                    .getInChIToStructure(inchi, SilentChemObjectBuilder.getInstance());
+        } catch (CDKException e) {
+            throw new StructureException("invalid InChI '" + inchi + "': " + firstLine(e), e);
+        } catch (LinkageError e) {
+            throw new StructureException("cannot read InChI '" + inchi
+                    + "': the native InChI library could not be loaded (" + e.getMessage() + ")", e);
+        }
+        String status = String.valueOf(toStructure.getStatus());
+        if (status.equals("ERROR") || toStructure.getAtomContainer() == null
+                || toStructure.getAtomContainer().getAtomCount() == 0) {
+            throw new StructureException("invalid InChI '" + inchi + "': "
+                    + String.valueOf(toStructure.getMessage()).toLowerCase(Locale.ROOT));
+        }
+        return new Structure(inchi, toStructure.getAtomContainer());
+    }
+
+    /** The text this structure was parsed from, unchanged. */
+    public String source() {
+        return source;
+    }
+
+    /** The full formula including implicit and explicit hydrogens; "R" for wildcard atoms. */
+    public Formula formula() {
+        return formula;
+    }
+
+    /** The net formal charge (sum of atom charges). */
+    public int charge() {
+        return charge;
+    }
+
+    /** The number of non-hydrogen atoms (pseudo atoms included). */
+    public int heavyAtomCount() {
+        return graph.atomCount();
+    }
+
+    /** CDK's canonical SMILES with aromatic symbols, stereo and charges: equal for equal molecules. */
+    public String canonicalSmiles() {
+        return canonicalSmiles;
+    }
+
+    /** "sha256:" plus the first 16 hex digits of the SHA-256 of {@link #canonicalSmiles()}. */
+    public String fingerprint() {
+        return fingerprint;
+    }
+
+    /** The heavy-atom graph the atom mapper works on. */
+    public MoleculeGraph graph() {
+        return graph;
+    }
+
+    /**
+     * This molecule as SMILES in input atom order, with heavy atom k (0-based) carrying the
+     * OpenSMILES atom class {@code classes[k]} when it is positive.
+     *
+     * @throws IllegalArgumentException when {@code classes.length != heavyAtomCount()}
+     */
+    public String smilesWithAtomClasses(int[] classes) {
+        if (classes.length != heavyToAtom.length) {
+            throw new IllegalArgumentException("expected " + heavyToAtom.length + " classes, got "
+                    + classes.length);
+        }
+        try {
+            IAtomContainer copy = master.clone();
+            for (IAtom atom : copy.atoms()) {
+                atom.setMapIdx(0);
+            }
+            for (int k = 0; k < classes.length; k++) {
+                if (classes[k] > 0) {
+                    copy.getAtom(heavyToAtom[k]).setMapIdx(classes[k]);
+                }
+            }
+            return new SmilesGenerator(SmiFlavor.AtomAtomMap | SmiFlavor.Stereo).create(copy);
+        } catch (CloneNotSupportedException | CDKException e) {
+            throw new IllegalStateException("cannot write SMILES for " + source, e);
+        }
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Structure s && s.source.equals(source);
+    }
+
+    @Override
+    public int hashCode() {
+        return source.hashCode();
+    }
+
+    @Override
+    public String toString() {
+        return source;
+    }
+
+    private static String firstLine(Exception e) {
+        String m = String.valueOf(e.getMessage()).strip();
+        int nl = m.indexOf('\n');
+        String line = nl < 0 ? m : m.substring(0, nl).strip();
+        // CDK repeats the input ("could not parse 'C1CC', ..."); the caller quotes it already.
+        if (line.startsWith("could not parse '")) {
+            int comma = line.indexOf("', ");
+            line = comma < 0 ? line : line.substring(comma + 3);
+        }
+        while (line.endsWith(":") || line.endsWith(".")) {
+            line = line.substring(0, line.length() - 1).strip();
+        }
+        return line.isEmpty() ? line : Character.toLowerCase(line.charAt(0)) + line.substring(1);
+    }
+
+    private static String sha256(String text) {
+        try {
+            MessageDigest digest = MessageDigest.getInstance("SHA-256");
+            return HexFormat.of().formatHex(digest.digest(text.getBytes(StandardCharsets.UTF_8)));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is missing from this JDK", e);
+        }
+    }
+}
