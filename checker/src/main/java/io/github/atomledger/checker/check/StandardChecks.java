@@ -10,6 +10,7 @@ import io.github.atomledger.checker.check.balance.MissingChemistryCheck;
 import io.github.atomledger.checker.check.balance.NotComputableCheck;
 import io.github.atomledger.checker.check.balance.PolymerFormulaCheck;
 import io.github.atomledger.checker.check.balance.SymbolCheck;
+import io.github.atomledger.checker.check.consistency.MassConsistencyCheck;
 import io.github.atomledger.checker.check.integrity.DuplicateIdCheck;
 import io.github.atomledger.checker.check.integrity.ReactionShapeCheck;
 import io.github.atomledger.checker.check.integrity.ReferenceCheck;
@@ -38,6 +39,7 @@ public final class StandardChecks {
                 new NotComputableCheck(),
                 new PolymerFormulaCheck(),
                 new ExemptReactionCheck(),
-                new ClassMismatchCheck());
+                new ClassMismatchCheck(),
+                new MassConsistencyCheck());
     }
 }
