@@ -86,6 +86,15 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1073741824")
     private long maxModelBytes;
 
+    /**
+     * A structure side table: a tab-separated file with a header line naming the columns
+     * {@code species} and {@code smiles} or {@code inchi}. Each species' formula and charge are
+     * compared with those derived from its structure. Relative to the project directory. Default:
+     * none. Example: {@code -Datomledger.structures=models/structures.tsv}.
+     */
+    @Parameter(property = "atomledger.structures")
+    private File structures;
+
     /** The project directory; model patterns are relative to it. */
     @Parameter(defaultValue = "${basedir}", readonly = true, required = true)
     private File baseDirectory;
@@ -98,7 +107,8 @@ public final class CheckMojo extends AbstractMojo {
         }
         RunConfig config = ConfigMapper.toConfig(baseDirectory, models,
                 ConfigMapper.reportDirectory(reportDirectory, buildDirectory, baseDirectory), failOnSeverity, formats,
-                severities, classSeverities, maxModelBytes);
+                severities, classSeverities, maxModelBytes)
+                .withStructureTable(structures == null ? null : structures.toPath());
         RunResult result;
         List<Path> written;
         try {

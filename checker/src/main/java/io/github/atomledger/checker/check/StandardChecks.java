@@ -12,6 +12,7 @@ import io.github.atomledger.checker.check.balance.PolymerFormulaCheck;
 import io.github.atomledger.checker.check.balance.SymbolCheck;
 import io.github.atomledger.checker.check.consistency.MassConsistencyCheck;
 import io.github.atomledger.checker.check.integrity.DuplicateIdCheck;
+import io.github.atomledger.checker.check.structure.StructureFormulaCheck;
 import io.github.atomledger.checker.check.integrity.ReactionShapeCheck;
 import io.github.atomledger.checker.check.integrity.ReferenceCheck;
 
@@ -40,6 +41,9 @@ public final class StandardChecks {
                 new PolymerFormulaCheck(),
                 new ExemptReactionCheck(),
                 new ClassMismatchCheck(),
-                new MassConsistencyCheck());
+                new MassConsistencyCheck(),
+                StructureFormulaCheck.invalid(),
+                StructureFormulaCheck.mismatch(),
+                StructureFormulaCheck.protonation());
     }
 }

@@ -13,6 +13,7 @@ import io.github.atomledger.checker.model.LoadOptions;
 import io.github.atomledger.checker.model.ModelLoader;
 import io.github.atomledger.checker.model.ModelView;
 import io.github.atomledger.checker.model.ReactionInfo;
+import io.github.atomledger.checker.model.StructureTable;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -52,22 +53,32 @@ public final class Engine {
     public RunResult run(RunConfig config, RunListener listener) {
         List<Path> files = ModelLocator.locate(config.baseDirectory(), config.models());
         ModelLoader loader = new ModelLoader(new LoadOptions(config.maxModelBytes()));
+        Map<String, StructureTable.Entry> structures = Map.of();
+        if (config.structureTable() != null) {
+            Path table = config.baseDirectory().resolve(config.structureTable()).normalize();
+            structures = StructureTable.load(table, ModelLocator.relative(config.baseDirectory(), table));
+        }
         List<ModelResult> results = new ArrayList<>();
         for (Path file : files) {
             String display = ModelLocator.relative(config.baseDirectory(), file);
             listener.debug("reading " + display);
             ModelView model = loader.load(file, display);
-            results.add(check(model, config.policy()));
+            results.add(check(model, config.policy(), structures));
         }
         return new RunResult(config, results);
     }
 
     /** Checks one loaded model. */
     public ModelResult check(ModelView model, SeverityPolicy policy) {
+        return check(model, policy, Map.of());
+    }
+
+    /** Checks one loaded model with structures (species id to table entry). */
+    public ModelResult check(ModelView model, SeverityPolicy policy, Map<String, StructureTable.Entry> structures) {
         BalanceCalculator calculator = new BalanceCalculator();
         Map<String, SpeciesChemistry> chemistry = calculator.chemistry(model);
         Map<String, ReactionBalance> balances = calculator.balances(model, chemistry);
-        CheckContext context = new CheckContext(model, chemistry, balances);
+        CheckContext context = new CheckContext(model, chemistry, balances, structures);
 
         Map<String, List<Finding>> byReaction = new HashMap<>();
         List<Finding> modelFindings = new ArrayList<>();

@@ -20,9 +20,17 @@ import java.util.Set;
  * @param formats         report formats to write
  * @param policy          severity overrides
  * @param maxModelBytes   the most bytes of XML read from one model file (after decompression)
+ * @param structureTable  the structure side table (TSV: species, smiles or inchi), relative to the
+ *                        base directory or absolute; null when none
  */
 public record RunConfig(Path baseDirectory, List<String> models, Path reportDirectory, Severity failOn,
-                        Set<ReportFormat> formats, SeverityPolicy policy, long maxModelBytes) {
+                        Set<ReportFormat> formats, SeverityPolicy policy, long maxModelBytes, Path structureTable) {
+
+    /** Without a structure table. */
+    public RunConfig(Path baseDirectory, List<String> models, Path reportDirectory, Severity failOn,
+                     Set<ReportFormat> formats, SeverityPolicy policy, long maxModelBytes) {
+        this(baseDirectory, models, reportDirectory, failOn, formats, policy, maxModelBytes, null);
+    }
 
     /** The default model patterns: every .xml and .xml.gz file below {@code models/}. */
     public static final List<String> DEFAULT_MODELS = List.of("models/**.{xml,xml.gz}");
@@ -48,10 +56,17 @@ public record RunConfig(Path baseDirectory, List<String> models, Path reportDire
     }
 
     public RunConfig withFormats(Set<ReportFormat> newFormats) {
-        return new RunConfig(baseDirectory, models, reportDirectory, failOn, newFormats, policy, maxModelBytes);
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, newFormats, policy, maxModelBytes,
+                structureTable);
     }
 
     public RunConfig withPolicy(SeverityPolicy newPolicy) {
-        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, newPolicy, maxModelBytes);
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, newPolicy, maxModelBytes,
+                structureTable);
+    }
+
+    /** The same configuration with a structure table (null for none). */
+    public RunConfig withStructureTable(Path table) {
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, policy, maxModelBytes, table);
     }
 }
