@@ -54,10 +54,10 @@ public final class StoichiometricConsistency {
     private static final double TOLERANCE = 1e-7;
 
     /** The most leak LPs solved to collect unconserved metabolites. */
-    static final int MAX_LEAK_ROUNDS = 4;
+    static final int MAX_LEAK_ROUNDS = 3;
 
     /** Wall-clock budget of one LP solve, in milliseconds. */
-    static final long LP_TIME_BUDGET_MS = 60_000;
+    static final long LP_TIME_BUDGET_MS = 30_000;
 
     /** The net stoichiometry of one reaction: species index to coefficient. */
     private record Column(String reaction, Map<Integer, Rational> entries) {
@@ -96,7 +96,8 @@ public final class StoichiometricConsistency {
             return new ConsistencyResult(0, columns.size(), new TreeSet<>(), new TreeMap<>(), new TreeMap<>(), "exact");
         }
         double[] masses = new double[n];
-        Boolean consistent = conservable(n, columns, masses);
+        boolean[] zeroed = new boolean[n];
+        Boolean consistent = conservable(n, columns, masses, zeroed);
         if (consistent == null) {
             return new ConsistencyResult(n, columns.size(), new TreeSet<>(), new TreeMap<>(), new TreeMap<>(), "undecided");
         }
@@ -107,6 +108,8 @@ public final class StoichiometricConsistency {
         }
         // Inconsistent: collect unconserved metabolites from leak combinations, each new one
         // required to reach a metabolite not yet found, until none is left or the budget ends.
+        // The first round looks for any leak (so the reported combination may explain the presolve's
+        // zeros too); the presolve's proven zeros then join the found set.
         boolean[] found = new boolean[n];
         SortedMap<String, Rational> firstFluxes = null;
         SortedMap<String, Rational> firstNet = null;
@@ -116,6 +119,9 @@ public final class StoichiometricConsistency {
             double[] flux = leak(n, columns, found);
             if (flux == null) {
                 complete = true;
+                break;
+            }
+            if (flux.length == 0) {
                 break;
             }
             SortedMap<String, Rational> fluxes = new TreeMap<>();
@@ -146,6 +152,10 @@ public final class StoichiometricConsistency {
             if (firstFluxes == null) {
                 firstFluxes = fluxes;
                 firstNet = netBySpecies;
+                for (int i = 0; i < n; i++) {
+                    progress |= zeroed[i] && !found[i];
+                    found[i] |= zeroed[i];
+                }
             }
             if (!progress) {
                 break;
@@ -153,7 +163,7 @@ public final class StoichiometricConsistency {
         }
         TreeSet<String> unconserved = new TreeSet<>();
         for (int i = 0; i < n; i++) {
-            if (found[i]) {
+            if (found[i] || zeroed[i]) {
                 unconserved.add(names.get(i));
             }
         }
@@ -187,7 +197,7 @@ public final class StoichiometricConsistency {
      * model). The LP then runs on what is left, with m = k + s, 0 ≤ k ≤ 1, s ≥ 0 and the
      * objective Σ k, so it has one row per remaining reaction and no others.
      */
-    private static Boolean conservable(int n, List<Column> columns, double[] masses) {
+    private static Boolean conservable(int n, List<Column> columns, double[] masses, boolean[] zeroed) {
         int[] parent = new int[n];
         Rational[] ratio = new Rational[n];
         boolean[] zero = new boolean[n];
@@ -237,6 +247,12 @@ public final class StoichiometricConsistency {
                 roots.add(root);
             }
         }
+        boolean anyZero = false;
+        for (int i = 0; i < n; i++) {
+            // Forced to zero by the presolve: proven unconserved (a one-signed row of non-negative masses).
+            zeroed[i] = zero[find(parent, ratio, i)];
+            anyZero |= zeroed[i];
+        }
         Map<Integer, Double> rootMass = new LinkedHashMap<>();
         if (!roots.isEmpty()) {
             // Feasibility: every remaining mass at least 1 (Gevorgyan et al. 2008, section 3.1).
@@ -262,11 +278,11 @@ public final class StoichiometricConsistency {
                 return false;
             }
         }
+        if (anyZero) {
+            return false;
+        }
         for (int i = 0; i < n; i++) {
             int root = find(parent, ratio, i);
-            if (zero[root]) {
-                return false;
-            }
             masses[i] = rootMass.get(root) * ratio[i].numerator().doubleValue() / ratio[i].denominator().doubleValue();
         }
         return true;
@@ -294,7 +310,8 @@ public final class StoichiometricConsistency {
 
     /**
      * A sparse leak: v with Sv ≥ 0 and Σ(Sv) ≥ 1 over the metabolites not yet {@code found};
-     * minimises Σ|v| (v = v⁺ − v⁻). Null when the solver finds none.
+     * minimises Σ|v| (v = v⁺ − v⁻). Null when there is none (the LP is infeasible), an empty array
+     * when the solver stopped at its time budget.
      */
     private static double[] leak(int n, List<Column> columns, boolean[] found) {
         ExpressionsBasedModel lp = newModel();
@@ -322,8 +339,11 @@ public final class StoichiometricConsistency {
             }
         }
         Optimisation.Result result = lp.minimise();
-        if (!result.getState().isFeasible()) {
+        if (result.getState() == Optimisation.State.INFEASIBLE) {
             return null;
+        }
+        if (!result.getState().isFeasible()) {
+            return new double[0];
         }
         double[] v = new double[r];
         for (int j = 0; j < r; j++) {
