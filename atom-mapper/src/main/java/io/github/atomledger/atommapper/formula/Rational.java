@@ -61,6 +61,9 @@ public final class Rational implements Comparable<Rational> {
      * Parses decimal text exactly: an optional sign, digits with an optional fraction, an
      * optional exponent ({@code 1e-06}), or a fraction {@code p/q} as printed by {@link #toString()}.
      *
+     * <p>Exponents have at most three digits, so that a hostile text such as {@code 1e999999}
+     * cannot make the parser build a number with a million digits.
+     *
      * @throws NumberFormatException for anything else, including {@code NaN} and {@code INF}
      */
     public static Rational parse(String text) {
@@ -68,9 +71,13 @@ public final class Rational implements Comparable<Rational> {
         String s = text.strip();
         int slash = s.indexOf('/');
         if (slash > 0) {
-            return of(new BigInteger(s.substring(0, slash)), new BigInteger(s.substring(slash + 1)));
+            BigInteger d = new BigInteger(s.substring(slash + 1));
+            if (d.signum() == 0) {
+                throw new NumberFormatException("zero denominator: '" + text + "'");
+            }
+            return of(new BigInteger(s.substring(0, slash)), d);
         }
-        if (s.isEmpty() || !s.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d{1,6})?")) {
+        if (s.isEmpty() || !s.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d{1,3})?")) {
             throw new NumberFormatException("not a finite decimal number: '" + text + "'");
         }
         return of(new BigDecimal(s));

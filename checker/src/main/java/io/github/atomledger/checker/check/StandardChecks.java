@@ -10,7 +10,9 @@ import io.github.atomledger.checker.check.balance.MissingChemistryCheck;
 import io.github.atomledger.checker.check.balance.NotComputableCheck;
 import io.github.atomledger.checker.check.balance.PolymerFormulaCheck;
 import io.github.atomledger.checker.check.balance.SymbolCheck;
+import io.github.atomledger.checker.check.consistency.MassConsistencyCheck;
 import io.github.atomledger.checker.check.integrity.DuplicateIdCheck;
+import io.github.atomledger.checker.check.structure.StructureFormulaCheck;
 import io.github.atomledger.checker.check.integrity.ReactionShapeCheck;
 import io.github.atomledger.checker.check.integrity.ReferenceCheck;
 
@@ -45,7 +47,10 @@ public final class StandardChecks {
                 new NotComputableCheck(),
                 new PolymerFormulaCheck(),
                 new ExemptReactionCheck(),
-                new ClassMismatchCheck()));
+                new ClassMismatchCheck(),
+                new MassConsistencyCheck(),
+                StructureFormulaCheck.mismatch(),
+                StructureFormulaCheck.protonation()));
         all.addAll(StructureSourceCheck.all());
         all.add(new StructureMissingCheck());
         all.addAll(MappingStatusCheck.all());

@@ -85,6 +85,9 @@ public final class Engine {
         Map<String, List<Finding>> byReaction = new HashMap<>();
         List<Finding> modelFindings = new ArrayList<>();
         for (ModelCheck check : checks) {
+            if (policy.switchedOff(check.ruleId())) {
+                continue;
+            }
             List<Finding> found;
             try {
                 found = check.check(context);

@@ -118,6 +118,15 @@ public final class SeverityPolicy {
         return Optional.of(f.withSeverity(Severity.parse(value)));
     }
 
+    /**
+     * True when every finding of the rule would be dropped, so the engine need not run the check at
+     * all (some are expensive, such as the consistency LP): the rule is {@code off} and no class
+     * override could bring a finding back.
+     */
+    public boolean switchedOff(String ruleId) {
+        return OFF.equals(byRule.get(ruleId)) && (!ruleId.startsWith("balance.") || byClass.isEmpty());
+    }
+
     public Map<String, String> ruleOverrides() {
         return byRule;
     }

@@ -2,7 +2,6 @@ package io.github.atomledger.checker.model;
 
 import io.github.atomledger.checker.AtomLedgerException;
 import io.github.atomledger.checker.model.internal.CappedInputStream;
-import io.github.atomledger.checker.model.internal.NotesFields;
 import io.github.atomledger.checker.model.internal.RawReaction;
 import io.github.atomledger.checker.model.internal.RawSpecies;
 import io.github.atomledger.checker.model.internal.RecordingEventReader;
@@ -12,8 +11,6 @@ import com.ctc.wstx.stax.WstxInputFactory;
 import java.io.BufferedInputStream;
 import java.io.IOException;
 import java.io.InputStream;
-import java.net.URLDecoder;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -24,7 +21,6 @@ import java.util.zip.GZIPInputStream;
 import javax.xml.stream.Location;
 import javax.xml.stream.XMLInputFactory;
 import javax.xml.stream.XMLStreamException;
-import org.sbml.jsbml.CVTerm;
 import org.sbml.jsbml.Compartment;
 import org.sbml.jsbml.Model;
 import org.sbml.jsbml.Reaction;
@@ -173,7 +169,7 @@ public final class ModelLoader {
     }
 
     private static SpeciesInfo species(Species s, RawSpecies raw) {
-        Map<String, String> notes = s.isSetNotes() ? NotesFields.parse(s.getNotes()) : Map.of();
+        Map<String, String> notes = raw == null ? Map.of() : raw.notes();
         String formula = raw == null ? null : raw.formula();
         FormulaSource formulaSource = FormulaSource.FBC;
         if (formula == null) {
@@ -201,29 +197,7 @@ public final class ModelLoader {
         }
         return new SpeciesInfo(s.getId(), s.getName(), s.getCompartment(), s.getBoundaryCondition(),
                 s.isSetSBOTerm() ? s.getSBOTermID() : "", formula, formulaSource, charge, chargeSource,
-                inchis(s), raw == null ? 0 : raw.line());
-    }
-
-    private static List<String> inchis(Species s) {
-        List<String> out = new ArrayList<>();
-        if (!s.isSetAnnotation()) {
-            return out;
-        }
-        for (CVTerm term : s.getCVTerms()) {
-            for (String uri : term.getResources()) {
-                int at = uri.indexOf("InChI=");
-                if (at >= 0 && uri.toLowerCase(java.util.Locale.ROOT).contains("inchi")) {
-                    String value = uri.substring(at);
-                    if (value.contains("%")) {
-                        value = URLDecoder.decode(value, StandardCharsets.UTF_8);
-                    }
-                    if (!out.contains(value)) {
-                        out.add(value);
-                    }
-                }
-            }
-        }
-        return out;
+                raw == null ? List.of() : raw.inchis(), raw == null ? 0 : raw.line());
     }
 
     private static ReactionInfo reaction(Reaction r, RawReaction raw, int level) {

@@ -19,7 +19,9 @@ import java.util.Set;
  *
  * <p>SBO terms (Systems Biology Ontology, https://www.ebi.ac.uk/sbo): SBO:0000627 exchange,
  * SBO:0000628 demand, SBO:0000632 sink, SBO:0000631 pseudoreaction, SBO:0000629 biomass
- * production, SBO:0000630 ATP maintenance, SBO:0000655 transport reaction and SBO:0000185
+ * production, SBO:0000630 ATP maintenance, SBO:0000395 encapsulating process (the parent of
+ * biomass production and ATP maintenance, used by genome-scale models for lumping
+ * pseudo-reactions such as "lipid pseudoreaction"; treated as biomass, that is lumping), SBO:0000655 transport reaction and SBO:0000185
  * translocation reaction. Children of SBO:0000655 (SBO:0000654, 0000657 to 0000660) are listed
  * from memory. Generic terms (SBO:0000176 biochemical reaction, SBO:0000375 process, ...) say
  * nothing and leave the decision to the structure.
@@ -47,6 +49,7 @@ public final class ReactionClassifier {
             Map.entry("SBO:0000632", ReactionClass.SINK),
             Map.entry("SBO:0000631", ReactionClass.PSEUDO),
             Map.entry("SBO:0000629", ReactionClass.BIOMASS),
+            Map.entry("SBO:0000395", ReactionClass.BIOMASS),
             Map.entry("SBO:0000630", ReactionClass.ATP_MAINTENANCE),
             Map.entry("SBO:0000655", ReactionClass.TRANSPORT),
             Map.entry("SBO:0000185", ReactionClass.TRANSPORT),

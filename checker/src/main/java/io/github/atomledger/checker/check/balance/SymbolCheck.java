@@ -16,8 +16,9 @@ import java.util.TreeSet;
 /**
  * {@code model.unknown-symbol}: a formula uses a symbol that is not a chemical element and not one
  * of the generic symbols R and X (fbc version 3: "Generic components can only be specified as
- * the symbols R or X"). Such symbols (Protein, Fe2S2 written as a token, typos like "Co" for
- * "CO") balance by count, but a curator should look. Data: {@code symbols}, {@code formula}.
+ * the symbols R or X"). Such symbols (Protein, ACP, typos such as "Cc" or "Ph") balance by
+ * count, but a curator should look. A typo that happens to be an element ("Co"
+ * for "CO") cannot be seen here; it shows up as an imbalance. Data: {@code symbols}, {@code formula}.
  */
 public final class SymbolCheck implements ModelCheck {
 

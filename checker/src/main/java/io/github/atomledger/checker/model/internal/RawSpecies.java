@@ -1,5 +1,45 @@
 package io.github.atomledger.checker.model.internal;
 
-/** Attribute texts of one species start tag, exactly as written; null when absent. */
-public record RawSpecies(String id, String formula, String fbcCharge, String sbmlCharge, int line) {
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * Attribute texts of one species start tag, exactly as written (null when absent), plus what its
+ * notes and annotation carry for the checks.
+ *
+ * @param notes  {@code KEY: value} lines of the notes (keys upper-cased, first occurrence wins)
+ * @param inchis InChI strings from {@code rdf:resource} URIs of the annotation, in document order
+ */
+public record RawSpecies(String id, String formula, String fbcCharge, String sbmlCharge, int line,
+                         Map<String, String> notes, List<String> inchis) {
+
+    public RawSpecies {
+        notes = Map.copyOf(notes);
+        inchis = List.copyOf(inchis);
+    }
+
+    /** Filled while the species element streams past; confined to one reader. */
+    static final class Builder {
+        private final String id;
+        private final String formula;
+        private final String fbcCharge;
+        private final String sbmlCharge;
+        private final int line;
+        final Map<String, String> notes = new TreeMap<>();
+        final List<String> inchis = new ArrayList<>();
+
+        Builder(String id, String formula, String fbcCharge, String sbmlCharge, int line) {
+            this.id = id;
+            this.formula = formula;
+            this.fbcCharge = fbcCharge;
+            this.sbmlCharge = sbmlCharge;
+            this.line = line;
+        }
+
+        RawSpecies build() {
+            return new RawSpecies(id, formula, fbcCharge, sbmlCharge, line, notes, inchis);
+        }
+    }
 }

@@ -2,13 +2,18 @@ package io.github.atomledger.checker.model.internal;
 
 import io.github.atomledger.checker.AtomLedgerException;
 
+import java.net.URLDecoder;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import javax.xml.namespace.QName;
 import javax.xml.stream.XMLEventFactory;
 import javax.xml.stream.XMLEventReader;
@@ -30,19 +35,26 @@ import javax.xml.stream.util.EventReaderDelegate;
  *   <li>records every SId so that duplicates can be reported,</li>
  *   <li>rewrites the fbc version 3 namespace to version 2 so that JSBML 1.6.1 reads the rest of
  *       the package, and removes {@code fbc:charge} from what JSBML sees (we read the text
- *       ourselves: version 3 allows decimals, which JSBML would drop with an error).</li>
+ *       ourselves: version 3 allows decimals, which JSBML would drop with an error),</li>
+ *   <li>keeps {@code <notes>} and {@code <annotation>} away from JSBML: it reads the species'
+ *       {@code KEY: value} note lines and InChI resource URIs itself, and JSBML never builds the
+ *       XHTML and RDF trees no check reads (on yeast-GEM these were most of JSBML's time; see
+ *       BENCHMARKS.md).</li>
  * </ul>
  * Not thread-safe; one instance per read.
  */
 public final class RecordingEventReader extends EventReaderDelegate {
 
+    private static final String SBML_PREFIX = "http://www.sbml.org/sbml/level";
+    private static final String RDF = "http://www.w3.org/1999/02/22-rdf-syntax-ns#";
+    private static final Pattern FIELD = Pattern.compile("^\\s*([A-Za-z][A-Za-z0-9 _-]*?)\\s*:\\s*(.*?)\\s*$");
     public static final String FBC_PREFIX = "http://www.sbml.org/sbml/level3/version1/fbc/version";
     private static final String FBC_V2 = FBC_PREFIX + "2";
     private static final String FBC_V3 = FBC_PREFIX + "3";
 
     private final String file;
     private final XMLEventFactory events = XMLEventFactory.newInstance();
-    private final Map<String, RawSpecies> species = new LinkedHashMap<>();
+    private final Map<String, RawSpecies.Builder> species = new LinkedHashMap<>();
     private final Map<String, RawReaction> reactions = new LinkedHashMap<>();
     private final Map<String, Integer> idCounts = new HashMap<>();
     private boolean rootSeen;
@@ -52,6 +64,10 @@ public final class RecordingEventReader extends EventReaderDelegate {
     private List<RawReaction.Ref> currentList;
     private boolean inModifiers;
     private int opaqueDepth;
+    private String opaqueKind;
+    private RawSpecies.Builder currentSpecies;
+    private int blockDepth;
+    private final StringBuilder blockText = new StringBuilder();
 
     public RecordingEventReader(XMLEventReader parent, String file) {
         super(parent);
@@ -60,9 +76,41 @@ public final class RecordingEventReader extends EventReaderDelegate {
 
     @Override
     public XMLEvent nextEvent() throws XMLStreamException {
+        skipOpaque();
         XMLEvent e = super.nextEvent();
         observe(e);
         return rewrite(e);
+    }
+
+    @Override
+    public boolean hasNext() {
+        try {
+            skipOpaque();
+        } catch (XMLStreamException e) {
+            throw new IllegalStateException(e);
+        }
+        return super.hasNext();
+    }
+
+    /**
+     * Consumes a whole {@code <notes>} or {@code <annotation>} element (observing its events) when
+     * it is next, so JSBML never sees it.
+     */
+    private void skipOpaque() throws XMLStreamException {
+        while (rootSeen && super.hasNext()) {
+            XMLEvent next = super.peek();
+            if (next == null || !next.isStartElement() || opaqueDepth > 0 || !isOpaque(next.asStartElement())) {
+                return;
+            }
+            do {
+                observe(super.nextEvent());
+            } while (opaqueDepth > 0 && super.hasNext());
+        }
+    }
+
+    private static boolean isOpaque(StartElement s) {
+        String local = s.getName().getLocalPart();
+        return (local.equals("notes") || local.equals("annotation")) && s.getName().getNamespaceURI().startsWith(SBML_PREFIX);
     }
 
     @Override
@@ -76,6 +124,7 @@ public final class RecordingEventReader extends EventReaderDelegate {
 
     @Override
     public XMLEvent peek() throws XMLStreamException {
+        skipOpaque();
         XMLEvent e = super.peek();
         return e == null ? null : rewrite(e);
     }
@@ -103,6 +152,8 @@ public final class RecordingEventReader extends EventReaderDelegate {
             startElement(e.asStartElement(), line);
         } else if (e.isEndElement()) {
             endElement(e.asEndElement());
+        } else if (blockDepth > 0 && e.isCharacters()) {
+            blockText.append(e.asCharacters().getData());
         }
     }
 
@@ -130,10 +181,12 @@ public final class RecordingEventReader extends EventReaderDelegate {
         }
         if (opaqueDepth > 0) {
             opaqueDepth++;
+            insideOpaque(s, local);
             return;
         }
         if (local.equals("annotation") || local.equals("notes")) {
             opaqueDepth = 1;
+            opaqueKind = local;
             return;
         }
         String id = attr(s, "id");
@@ -145,8 +198,11 @@ public final class RecordingEventReader extends EventReaderDelegate {
             idCounts.merge(id, 1, Integer::sum);
         }
         switch (local) {
-            case "species" -> species.putIfAbsent(id == null ? "" : id, new RawSpecies(id, fbcAttr(s, "chemicalFormula"),
-                    fbcAttr(s, "charge"), attr(s, "charge"), line));
+            case "species" -> {
+                currentSpecies = new RawSpecies.Builder(id, fbcAttr(s, "chemicalFormula"), fbcAttr(s, "charge"),
+                        attr(s, "charge"), line);
+                species.putIfAbsent(id == null ? "" : id, currentSpecies);
+            }
             case "reaction" -> {
                 currentReaction = new RawReaction(id == null ? "" : id, line);
                 reactions.putIfAbsent(currentReaction.id(), currentReaction);
@@ -169,12 +225,57 @@ public final class RecordingEventReader extends EventReaderDelegate {
         }
     }
 
+    /** Inside a species' notes: collect block texts; inside its annotation: InChI resources. */
+    private void insideOpaque(StartElement s, String local) {
+        if (currentSpecies == null) {
+            return;
+        }
+        if (opaqueKind.equals("notes")) {
+            if (blockDepth > 0 || isBlock(local)) {
+                blockDepth++;
+            }
+            return;
+        }
+        Attribute resource = s.getAttributeByName(new QName(RDF, "resource"));
+        if (resource != null) {
+            String uri = resource.getValue();
+            int at = uri.indexOf("InChI=");
+            if (at >= 0 && uri.toLowerCase(Locale.ROOT).contains("inchi")) {
+                String value = uri.substring(at);
+                if (value.contains("%")) {
+                    value = URLDecoder.decode(value, StandardCharsets.UTF_8);
+                }
+                if (!currentSpecies.inchis.contains(value)) {
+                    currentSpecies.inchis.add(value);
+                }
+            }
+        }
+    }
+
+    private static boolean isBlock(String name) {
+        return name.equals("p") || name.equals("li") || name.equals("div") || name.equals("td");
+    }
+
+    private void endBlock() {
+        for (String textLine : blockText.toString().split("\\R")) {
+            Matcher m = FIELD.matcher(textLine);
+            if (m.matches()) {
+                currentSpecies.notes.putIfAbsent(m.group(1).strip().toUpperCase(Locale.ROOT), m.group(2));
+            }
+        }
+        blockText.setLength(0);
+    }
+
     private void endElement(EndElement e) {
         if (opaqueDepth > 0) {
             opaqueDepth--;
+            if (blockDepth > 0 && --blockDepth == 0) {
+                endBlock();
+            }
             return;
         }
         switch (e.getName().getLocalPart()) {
+            case "species" -> currentSpecies = null;
             case "reaction" -> currentReaction = null;
             case "listOfReactants", "listOfProducts" -> currentList = null;
             case "listOfModifiers" -> inModifiers = false;
@@ -250,8 +351,11 @@ public final class RecordingEventReader extends EventReaderDelegate {
         return s == null ? "" : s;
     }
 
+    /** Species as written, by id, in document order (the first element when an id repeats). */
     public Map<String, RawSpecies> species() {
-        return species;
+        Map<String, RawSpecies> out = new LinkedHashMap<>();
+        species.forEach((id, b) -> out.put(id, b.build()));
+        return out;
     }
 
     public Map<String, RawReaction> reactions() {

@@ -1,0 +1,88 @@
+package io.github.atomledger.checker.check.consistency;
+
+import io.github.atomledger.atommapper.formula.Rational;
+import io.github.atomledger.checker.check.CheckContext;
+import io.github.atomledger.checker.check.Finding;
+import io.github.atomledger.checker.check.ModelCheck;
+import io.github.atomledger.checker.check.Severity;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.StringJoiner;
+import java.util.TreeMap;
+
+/**
+ * {@code balance.mass-inconsistent}: the internal reactions admit no strictly positive mass
+ * vector that they all conserve (Gevorgyan, Poolman &amp; Fell 2008), formulas or not; some
+ * combination of reactions makes matter from nothing. One model-level finding. Data:
+ * {@code metabolites} and {@code reactions} (network size), {@code unconservedCount},
+ * {@code unconserved} (comma list), {@code causingReactions} (comma list), {@code fluxes}
+ * ({@code r=coefficient} comma list), {@code net} ({@code species=amount} comma list),
+ * {@code verification} ("exact" or "floating-point"). See {@link StoichiometricConsistency}.
+ */
+public final class MassConsistencyCheck implements ModelCheck {
+
+    /** At most this many ids are named in the message; the data lists all. */
+    private static final int SHOWN = 5;
+
+    private final StoichiometricConsistency analysis = new StoichiometricConsistency();
+
+    @Override
+    public String ruleId() {
+        return "balance.mass-inconsistent";
+    }
+
+    @Override
+    public String description() {
+        return "The internal reactions cannot all conserve any positive mass assignment (stoichiometric inconsistency).";
+    }
+
+    @Override
+    public Severity defaultSeverity() {
+        return Severity.ERROR;
+    }
+
+    @Override
+    public List<Finding> check(CheckContext context) {
+        ConsistencyResult r = analysis.analyse(context);
+        if (r.consistent()) {
+            return List.of();
+        }
+        Map<String, String> data = new TreeMap<>();
+        data.put("metabolites", Integer.toString(r.metabolites()));
+        data.put("reactions", Integer.toString(r.reactions()));
+        data.put("unconservedCount", Integer.toString(r.unconserved().size()));
+        data.put("unconserved", String.join(",", r.unconserved()));
+        data.put("causingReactions", String.join(",", r.causingReactions()));
+        data.put("fluxes", pairs(r.fluxes()));
+        data.put("net", pairs(r.net()));
+        data.put("verification", r.verification());
+        String id = context.model().modelId();
+        String message = "The internal reactions are stoichiometrically inconsistent: " + r.unconserved().size()
+                + " metabolite(s) cannot be given a conserved positive mass (" + shown(new ArrayList<>(r.unconserved()))
+                + "); reactions " + shown(r.causingReactions()) + " together make " + shown(describe(r.net()))
+                + " from nothing.";
+        return List.of(context.finding(this, id, 0, message, data));
+    }
+
+    private static String pairs(Map<String, Rational> m) {
+        StringJoiner j = new StringJoiner(",");
+        m.forEach((k, v) -> j.add(k + "=" + v));
+        return j.toString();
+    }
+
+    private static List<String> describe(Map<String, Rational> net) {
+        List<String> out = new ArrayList<>();
+        net.forEach((k, v) -> out.add(v.toDecimalString() + " " + k));
+        return out;
+    }
+
+    private static String shown(List<String> ids) {
+        if (ids.isEmpty()) {
+            return "none found";
+        }
+        String s = String.join(", ", ids.subList(0, Math.min(SHOWN, ids.size())));
+        return ids.size() > SHOWN ? s + ", ..." : s;
+    }
+}

@@ -1,0 +1,13 @@
+import groovy.json.JsonSlurper
+
+def report = new JsonSlurper().parse(new File(basedir, 'target/atomledger/report.json'))
+def model = report.models[0]
+def all = model.findings + model.reactions.collectMany { it.findings }
+def pairs = all.collect { [it.ruleId, it.elementId, it.severity] }.sort { a, b -> (a[0] + a[1]) <=> (b[0] + b[1]) }
+// Exactly one finding: the protonation-only mismatch of pyruvate (SMILES of pyruvic acid, one H and one charge more).
+assert pairs == [['structure.protonation', 'pyr_c', 'warning']]
+def f = all[0]
+assert f.data['delta.H'] == '-1' && f.data['delta.charge'] == '-1'
+assert f.data.declared == 'C3H3O3' && f.data.derived == 'C3H4O3'
+assert report.summary.failed == false
+return true
