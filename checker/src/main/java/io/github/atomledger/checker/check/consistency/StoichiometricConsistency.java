@@ -54,7 +54,7 @@ public final class StoichiometricConsistency {
     private static final double TOLERANCE = 1e-7;
 
     /** The most leak LPs solved to collect unconserved metabolites. */
-    static final int MAX_LEAK_ROUNDS = 1;
+    static final int MAX_LEAK_ROUNDS = 3;
 
     /** Wall-clock budget of one LP solve, in milliseconds. */
     static final long LP_TIME_BUDGET_MS = 5_000;

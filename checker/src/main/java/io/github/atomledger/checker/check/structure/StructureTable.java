@@ -18,7 +18,7 @@ import java.util.Map;
 /**
  * The species structure side table: a UTF-8 TSV file with a header line and the columns
  * {@code species} and {@code smiles} or {@code inchi} (other columns are ignored; a row may leave
- * one of them empty). Lines starting with {@code #} and blank lines are skipped.
+ * one of them empty, or both, which means no structure is known). Lines starting with {@code #} and blank lines are skipped.
  *
  * <p>Example:
  * <pre>
@@ -27,7 +27,7 @@ import java.util.Map;
  * </pre>
  *
  * @throws AtomLedgerException from {@link #load} naming the file and line for a missing header
- *         column, a duplicate species or a row without a structure
+ *         column, a row without a species id, or a duplicate species
  */
 public final class StructureTable {
 
@@ -109,7 +109,8 @@ public final class StructureTable {
             Entry e = !s.isEmpty() ? new Entry(id, "smiles", s, lineNo)
                     : !n.isEmpty() ? new Entry(id, "inchi", n, lineNo) : null;
             if (e == null) {
-                throw new AtomLedgerException(displayPath + ":" + lineNo + ": species " + id + " has no SMILES or InChI");
+                // A row with empty structure cells says "no structure known", as spreadsheets export them.
+                continue;
             }
             Entry previous = entries.putIfAbsent(id, e);
             if (previous != null) {
