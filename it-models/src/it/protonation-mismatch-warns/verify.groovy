@@ -2,7 +2,9 @@ import groovy.json.JsonSlurper
 
 def report = new JsonSlurper().parse(new File(basedir, 'target/atomledger/report.json'))
 def model = report.models[0]
-def all = model.findings + model.reactions.collectMany { it.findings }
+// Structures for only some species: the atom-map rules report the others (mapping.*); this case is
+// about the formula-versus-structure rules, so those are left out here.
+def all = (model.findings + model.reactions.collectMany { it.findings }).findAll { !it.ruleId.startsWith('mapping.') }
 def pairs = all.collect { [it.ruleId, it.elementId, it.severity] }.sort { a, b -> (a[0] + a[1]) <=> (b[0] + b[1]) }
 // Exactly one finding: the protonation-only mismatch of pyruvate (SMILES of pyruvic acid, one H and one charge more).
 assert pairs == [['structure.protonation', 'pyr_c', 'warning']]
