@@ -23,7 +23,7 @@ import org.junit.jupiter.api.io.TempDir;
  * annotated models, whatever the thread count (1 or 2) and the order of the model patterns.
  * Models: the demo model (invented organism, mapped with its structure table) and the
  * broken-content fixture (many findings, so that finding order matters). The time budget is
- * raised so that the node limit, which is deterministic, decides every status.
+ * raised far above what any demo reaction needs, so that no status depends on machine speed.
  */
 class DeterminismTest {
 
