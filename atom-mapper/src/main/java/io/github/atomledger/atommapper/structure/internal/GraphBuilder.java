@@ -105,7 +105,7 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
         Arrays.setAll(orbits, i -> i);
         refuseCrowdedAtoms(neighbours, source);
         if (n > 1) {
-            orbits = orbitsByPiece(symmetryCopy, neighbours);
+            orbits = orbitsByPiece(symmetryCopy);
         }
         String canonical = canonical(mol, SmiFlavor.Absolute | SmiFlavor.UseAromaticSymbols);
         if (canonical == null) {
@@ -143,14 +143,12 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
      * pieces and exchanges of identical pieces), without asking CDK for the symmetry of many
      * identical pieces at once, which takes minutes for a dozen benzenes.
      */
-    private static int[] orbitsByPiece(IAtomContainer symmetryCopy, int[][] neighbours) {
-        int n = neighbours.length;
+    private static int[] orbitsByPiece(IAtomContainer symmetryCopy) {
+        int n = symmetryCopy.getAtomCount();
         int[] parent = new int[n];
         Arrays.setAll(parent, i -> i);
-        for (int k = 0; k < n; k++) {
-            for (int m : neighbours[k]) {
-                union(parent, k, m);
-            }
+        for (IBond b : symmetryCopy.bonds()) {
+            union(parent, b.getBegin().getIndex(), b.getEnd().getIndex());
         }
         java.util.Map<Integer, List<Integer>> pieces = new java.util.TreeMap<>();
         for (int k = 0; k < n; k++) {
