@@ -73,6 +73,9 @@ public final class AnnotationIndex {
         f.setProperty(XMLInputFactory.SUPPORT_DTD, Boolean.FALSE);
         f.setProperty(XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, Boolean.FALSE);
         f.setProperty(XMLInputFactory.IS_REPLACING_ENTITY_REFERENCES, Boolean.FALSE);
+        f.setXMLResolver((publicId, systemId, base, ns) -> {
+            throw new XMLStreamException("external resources are never loaded (" + systemId + ")");
+        });
         Map<String, ReactionSpot> out = new LinkedHashMap<>();
         try {
             XMLStreamReader r = f.createXMLStreamReader(new StringReader(text));
@@ -93,6 +96,9 @@ public final class AnnotationIndex {
                 if (event == XMLStreamConstants.START_ELEMENT) {
                     depth++;
                     String local = r.getLocalName();
+                    if (depth == 1) {
+                        checkRoot(r, file);
+                    }
                     if (current == null && local.equals("reaction") && isSbml(r.getNamespaceURI())) {
                         current = new Builder(r.getAttributeValue(null, "id"), offset, tagEnd(text, offset),
                                 r.getLocation().getLineNumber());
@@ -136,10 +142,43 @@ public final class AnnotationIndex {
                 }
             }
         } catch (XMLStreamException e) {
-            int line = e.getLocation() == null ? 0 : e.getLocation().getLineNumber();
-            throw new AtomLedgerException(file + ":" + line + ": malformed XML: " + e.getMessage(), e);
+            throw new AtomLedgerException(where(file, e) + "malformed XML: " + clean(e), e);
         }
         return new AnnotationIndex(out);
+    }
+
+    /** The same refusals as ModelLoader: the root must be {@code <sbml>} of Level 2 or 3. */
+    private static void checkRoot(XMLStreamReader r, String file) {
+        int line = r.getLocation().getLineNumber();
+        String local = r.getLocalName();
+        String ns = r.getNamespaceURI() == null ? "" : r.getNamespaceURI();
+        if (!local.equals("sbml") || !isSbml(ns)) {
+            throw new AtomLedgerException(file + ":" + line + ": not an SBML file: the root element is <"
+                    + local + "> in namespace '" + ns + "', expected <sbml> in an SBML namespace");
+        }
+        String level = r.getAttributeValue(null, "level");
+        if (!"2".equals(level) && !"3".equals(level)) {
+            throw new AtomLedgerException(file + ":" + line + ": SBML Level " + level
+                    + " is not supported; AtomLedger reads Level 2 and Level 3");
+        }
+    }
+
+    private static String where(String file, XMLStreamException e) {
+        javax.xml.stream.Location loc = e.getLocation();
+        if (loc == null || loc.getLineNumber() <= 0) {
+            return file + ": ";
+        }
+        return file + ":" + loc.getLineNumber() + ":" + loc.getColumnNumber() + ": ";
+    }
+
+    /** Woodstox's message without its "ParseError at [row,col]" prefix, on one line. */
+    private static String clean(XMLStreamException e) {
+        String m = e.getMessage() == null ? e.toString() : e.getMessage();
+        int i = m.indexOf("Message: ");
+        if (i >= 0) {
+            m = m.substring(i + "Message: ".length());
+        }
+        return m.replaceAll("\\s*\\R\\s*", " ").replaceAll("\\s*at \\[row,col.*$", "").strip();
     }
 
     private static boolean isSbml(String ns) {

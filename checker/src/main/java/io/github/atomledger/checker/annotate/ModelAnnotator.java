@@ -65,6 +65,11 @@ public final class ModelAnnotator {
      * @throws AtomLedgerException when the file cannot be read or written, or changed meanwhile
      */
     public Outcome annotate(Path file, String display, Map<String, TransitionAnnotation> annotations) {
+        return annotate(file, display, annotations, () -> { });
+    }
+
+    /** As {@link #annotate(Path, String, Map)}; {@code beforeWrite} runs between reading and writing (tests). */
+    Outcome annotate(Path file, String display, Map<String, TransitionAnnotation> annotations, Runnable beforeWrite) {
         ModelText original = ModelText.read(file, display, maxBytes);
         String text = original.text();
         AnnotationIndex index = AnnotationIndex.scan(text, display);
@@ -88,6 +93,7 @@ public final class ModelAnnotator {
         boolean wouldChange = !updated.equals(text);
         boolean written = false;
         if (wouldChange && !dryRun) {
+            beforeWrite.run();
             write(original, original.encode(updated), display);
             written = true;
         }

@@ -29,6 +29,10 @@ record ModelText(Path path, byte[] bytes, String text, boolean gzip, boolean bom
     static ModelText read(Path path, String display, long maxBytes) {
         byte[] bytes;
         try {
+            if (Files.size(path) > maxBytes && !isGzip(path)) {
+                throw new AtomLedgerException(display + ": model size exceeds the cap of " + maxBytes
+                        + " bytes (set atomledger.maxModelBytes to raise it)");
+            }
             bytes = Files.readAllBytes(path);
         } catch (java.nio.file.NoSuchFileException e) {
             throw new AtomLedgerException(display + ": model file not found", e);
@@ -86,13 +90,20 @@ record ModelText(Path path, byte[] bytes, String text, boolean gzip, boolean bom
             while ((n = in.read(buf)) > 0) {
                 total += n;
                 if (total > maxBytes) {
-                    throw new AtomLedgerException(display + ": decompressed size exceeds the cap of " + maxBytes + " bytes");
+                    throw new AtomLedgerException(display + ": decompressed size exceeds the cap of " + maxBytes
+                            + " bytes (set atomledger.maxModelBytes to raise it)");
                 }
                 out.write(buf, 0, n);
             }
             return out.toByteArray();
         } catch (IOException e) {
             throw new AtomLedgerException(display + ": cannot decompress: " + e.getMessage(), e);
+        }
+    }
+
+    private static boolean isGzip(Path path) throws IOException {
+        try (java.io.InputStream in = Files.newInputStream(path)) {
+            return in.read() == 0x1f && in.read() == 0x8b;
         }
     }
 

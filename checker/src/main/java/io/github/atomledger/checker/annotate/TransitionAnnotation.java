@@ -61,9 +61,11 @@ public record TransitionAnnotation(String origin, String status, int cost, Strin
 
     /**
      * The element as XML text, its first line unindented and later lines indented by
-     * {@code indent} plus {@code unit} per level, with {@code newline} line ends.
+     * {@code indent} plus {@code unit} per level, with {@code lineEnd} line ends.
      */
-    public String toXml(String indent, String unit, String newline) {
+    public String toXml(String indent, String unit, String lineEnd) {
+        // The writer escapes a carriage return in text as "&#xd;": write '\n' and convert after.
+        String newline = "\n";
         StringWriter out = new StringWriter();
         try {
             XMLStreamWriter w = XMLOutputFactory.newFactory().createXMLStreamWriter(out);
@@ -112,6 +114,6 @@ public record TransitionAnnotation(String origin, String status, int cost, Strin
         } catch (XMLStreamException e) {
             throw new IllegalStateException("cannot write the annotation: " + e.getMessage(), e);
         }
-        return out.toString();
+        return lineEnd.equals("\n") ? out.toString() : out.toString().replace("\n", lineEnd);
     }
 }

@@ -4,18 +4,21 @@ import io.github.atomledger.atommapper.structure.StructureException;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.SortedSet;
 import java.util.function.Supplier;
 import org.openscience.cdk.aromaticity.Aromaticity;
 import org.openscience.cdk.aromaticity.ElectronDonation;
 import org.openscience.cdk.exception.CDKException;
 import org.openscience.cdk.graph.Cycles;
-import org.openscience.cdk.group.Partition;
+import org.openscience.cdk.group.Permutation;
+import org.openscience.cdk.group.PermutationGroup;
 import org.openscience.cdk.group.PartitionRefinement;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.interfaces.IBond;
 import org.openscience.cdk.interfaces.IPseudoAtom;
+import org.openscience.cdk.isomorphism.AtomMatcher;
+import org.openscience.cdk.isomorphism.BondMatcher;
+import org.openscience.cdk.isomorphism.VentoFoggia;
 import org.openscience.cdk.silent.Atom;
 import org.openscience.cdk.silent.AtomContainer;
 import org.openscience.cdk.silent.PseudoAtom;
@@ -101,6 +104,7 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
             neighbours[k] = list.stream().mapToInt(e -> e[0]).toArray();
             codes[k] = list.stream().mapToInt(e -> e[1]).toArray();
         }
+        refuseCrowdedAtoms(neighbours, source);
         Supplier<int[]> orbits = new Lazy<>(() -> orbits(symmetryCopy, n));
         Supplier<String> canonical = new Lazy<>(() -> canonicalOf(mol, source));
         return new GraphBuilder(elements, neighbours, codes, orbits, hydrogens,
@@ -111,14 +115,7 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
         int[] orbits = new int[n];
         Arrays.setAll(orbits, i -> i);
         if (n > 1) {
-            Partition p = PartitionRefinement.forAtoms().create().getAutomorphismPartition(symmetryCopy);
-            for (int c = 0; c < p.size(); c++) {
-                SortedSet<Integer> cell = p.getCell(c);
-                int first = cell.first();
-                for (int atom : cell) {
-                    orbits[atom] = first;
-                }
-            }
+            orbits = orbitsByPiece(symmetryCopy);
         }
         return orbits;
     }
@@ -132,6 +129,142 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
         }
         // Last resort, never seen on real input: the input text, which is at least deterministic.
         return canonical != null ? canonical : "input:" + source;
+    }
+
+    /**
+     * Most heavy-atom neighbours one atom may have. CDK's exact symmetry computation grows
+     * steeply with the number of interchangeable neighbours (twelve methyls on one atom: under a
+     * second; sixty: minutes), and no metabolite comes near (coordination numbers above twelve
+     * are rare even in inorganic chemistry; common practice).
+     */
+    static final int MAX_NEIGHBOURS = 12;
+
+    private static void refuseCrowdedAtoms(int[][] neighbours, String source) throws StructureException {
+        for (int k = 0; k < neighbours.length; k++) {
+            if (neighbours[k].length > MAX_NEIGHBOURS) {
+                throw new StructureException("cannot analyse '" + source + "': atom " + (k + 1) + " has "
+                        + neighbours[k].length + " bonds to heavy atoms, more than " + MAX_NEIGHBOURS);
+            }
+        }
+    }
+
+    /**
+     * Automorphism orbits computed per connected piece, joined across identical pieces by one
+     * isomorphism each: exactly the orbits of the whole graph (its automorphisms are those of the
+     * pieces and exchanges of identical pieces), without asking CDK for the symmetry of many
+     * identical pieces at once, which takes minutes for a dozen benzenes.
+     */
+    private static int[] orbitsByPiece(IAtomContainer symmetryCopy) {
+        int n = symmetryCopy.getAtomCount();
+        int[] parent = new int[n];
+        Arrays.setAll(parent, i -> i);
+        for (IBond b : symmetryCopy.bonds()) {
+            union(parent, b.getBegin().getIndex(), b.getEnd().getIndex());
+        }
+        java.util.Map<Integer, List<Integer>> pieces = new java.util.TreeMap<>();
+        for (int k = 0; k < n; k++) {
+            pieces.computeIfAbsent(root(parent, k), r -> new ArrayList<>()).add(k);
+        }
+        Arrays.setAll(parent, i -> i);
+        List<int[]> repAtoms = new ArrayList<>();
+        List<IAtomContainer> repContainers = new ArrayList<>();
+        for (List<Integer> atoms : pieces.values()) {
+            int[] global = atoms.stream().mapToInt(Integer::intValue).toArray();
+            IAtomContainer piece = piece(symmetryCopy, global);
+            if (global.length > 1) {
+                PermutationGroup group = PartitionRefinement.forAtoms().create().getAutomorphismGroup(piece);
+                int[] local = orbits(group, global.length);
+                for (int i = 0; i < global.length; i++) {
+                    union(parent, global[i], global[local[i]]);
+                }
+            }
+            boolean matched = false;
+            for (int r = 0; r < repContainers.size() && !matched; r++) {
+                int[] rep = repAtoms.get(r);
+                if (rep.length != global.length) {
+                    continue;
+                }
+                int[] iso = VentoFoggia.findIdentical(repContainers.get(r), AtomMatcher.forElement(),
+                        BondMatcher.forOrder()).match(piece);
+                if (iso.length == rep.length) {
+                    for (int i = 0; i < rep.length; i++) {
+                        union(parent, rep[i], global[iso[i]]);
+                    }
+                    matched = true;
+                }
+            }
+            if (!matched) {
+                repAtoms.add(global);
+                repContainers.add(piece);
+            }
+        }
+        int[] orbits = new int[n];
+        for (int k = 0; k < n; k++) {
+            orbits[k] = root(parent, k);
+        }
+        return orbits;
+    }
+
+    private static IAtomContainer piece(IAtomContainer all, int[] atoms) {
+        IAtomContainer piece = new AtomContainer();
+        java.util.Map<Integer, Integer> local = new java.util.HashMap<>();
+        for (int i = 0; i < atoms.length; i++) {
+            IAtom a = all.getAtom(atoms[i]);
+            IAtom c = a instanceof IPseudoAtom ? new PseudoAtom("R") : new Atom(a.getSymbol());
+            c.setFormalCharge(0);
+            c.setImplicitHydrogenCount(0);
+            piece.addAtom(c);
+            local.put(atoms[i], i);
+        }
+        for (IBond b : all.bonds()) {
+            Integer u = local.get(b.getBegin().getIndex());
+            Integer v = local.get(b.getEnd().getIndex());
+            if (u != null && v != null) {
+                piece.addBond(u, v, b.getOrder());
+            }
+        }
+        return piece;
+    }
+
+    private static void union(int[] parent, int x, int y) {
+        int a = root(parent, x);
+        int b = root(parent, y);
+        parent[Math.max(a, b)] = Math.min(a, b);
+    }
+
+    /**
+     * The orbits of an automorphism group, each atom labelled by the smallest atom of its orbit:
+     * the classes joined by the permutations stored in the group's Schreier-Sims table, which
+     * generate the group. (CDK's getAutomorphismPartition enumerates every group element instead,
+     * which never ends for inputs like twenty disconnected methanes, order 20!.)
+     */
+    private static int[] orbits(PermutationGroup group, int n) {
+        int[] parent = new int[n];
+        Arrays.setAll(parent, i -> i);
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                Permutation p = group.get(i, j);
+                if (p == null) {
+                    continue;
+                }
+                for (int k = 0; k < n; k++) {
+                    union(parent, k, p.get(k));
+                }
+            }
+        }
+        int[] orbits = new int[n];
+        for (int k = 0; k < n; k++) {
+            orbits[k] = root(parent, k);
+        }
+        return orbits;
+    }
+
+    private static int root(int[] parent, int k) {
+        while (parent[k] != k) {
+            parent[k] = parent[parent[k]];
+            k = parent[k];
+        }
+        return k;
     }
 
     private static String canonical(IAtomContainer mol, int flavor) {
