@@ -2,8 +2,8 @@ package io.github.atomledger.checker.annotate;
 
 import io.github.atomledger.atommapper.mapping.AtomTransition;
 import io.github.atomledger.checker.AtomLedgerException;
+import io.github.atomledger.checker.model.internal.SafeXml;
 
-import com.ctc.wstx.stax.WstxInputFactory;
 
 import java.io.StringReader;
 import java.util.ArrayList;
@@ -69,13 +69,7 @@ public final class AnnotationIndex {
 
     /** Scans a model's text; {@code file} names it in error messages. */
     public static AnnotationIndex scan(String text, String file) {
-        XMLInputFactory f = new WstxInputFactory();
-        f.setProperty(XMLInputFactory.SUPPORT_DTD, Boolean.FALSE);
-        f.setProperty(XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, Boolean.FALSE);
-        f.setProperty(XMLInputFactory.IS_REPLACING_ENTITY_REFERENCES, Boolean.FALSE);
-        f.setXMLResolver((publicId, systemId, base, ns) -> {
-            throw new XMLStreamException("external resources are never loaded (" + systemId + ")");
-        });
+        XMLInputFactory f = SafeXml.factory();
         Map<String, ReactionSpot> out = new LinkedHashMap<>();
         try {
             XMLStreamReader r = f.createXMLStreamReader(new StringReader(text));
@@ -164,21 +158,11 @@ public final class AnnotationIndex {
     }
 
     private static String where(String file, XMLStreamException e) {
-        javax.xml.stream.Location loc = e.getLocation();
-        if (loc == null || loc.getLineNumber() <= 0) {
-            return file + ": ";
-        }
-        return file + ":" + loc.getLineNumber() + ":" + loc.getColumnNumber() + ": ";
+        return SafeXml.where(file, e.getLocation());
     }
 
-    /** Woodstox's message without its "ParseError at [row,col]" prefix, on one line. */
     private static String clean(XMLStreamException e) {
-        String m = e.getMessage() == null ? e.toString() : e.getMessage();
-        int i = m.indexOf("Message: ");
-        if (i >= 0) {
-            m = m.substring(i + "Message: ".length());
-        }
-        return m.replaceAll("\\s*\\R\\s*", " ").replaceAll("\\s*at \\[row,col.*$", "").strip();
+        return SafeXml.clean(e);
     }
 
     private static boolean isSbml(String ns) {

@@ -5,8 +5,8 @@ import io.github.atomledger.checker.model.internal.CappedInputStream;
 import io.github.atomledger.checker.model.internal.RawReaction;
 import io.github.atomledger.checker.model.internal.RawSpecies;
 import io.github.atomledger.checker.model.internal.RecordingEventReader;
+import io.github.atomledger.checker.model.internal.SafeXml;
 
-import com.ctc.wstx.stax.WstxInputFactory;
 
 import java.io.BufferedInputStream;
 import java.io.IOException;
@@ -121,31 +121,15 @@ public final class ModelLoader {
     }
 
     static XMLInputFactory hardenedFactory() {
-        XMLInputFactory f = new WstxInputFactory();
-        f.setProperty(XMLInputFactory.SUPPORT_DTD, Boolean.FALSE);
-        f.setProperty(XMLInputFactory.IS_SUPPORTING_EXTERNAL_ENTITIES, Boolean.FALSE);
-        f.setProperty(XMLInputFactory.IS_REPLACING_ENTITY_REFERENCES, Boolean.FALSE);
-        f.setXMLResolver((publicId, systemId, base, ns) -> {
-            throw new XMLStreamException("external resources are never loaded (" + systemId + ")");
-        });
-        return f;
+        return SafeXml.factory();
     }
 
     private static String where(String file, Location loc) {
-        if (loc == null || loc.getLineNumber() <= 0) {
-            return file + ": ";
-        }
-        return file + ":" + loc.getLineNumber() + ":" + loc.getColumnNumber() + ": ";
+        return SafeXml.where(file, loc);
     }
 
     private static String clean(XMLStreamException e) {
-        String m = e.getMessage() == null ? e.toString() : e.getMessage();
-        // Woodstox prefixes "ParseError at [row,col]:[..]\nMessage: "; keep the message line.
-        int i = m.indexOf("Message: ");
-        if (i >= 0) {
-            m = m.substring(i + "Message: ".length());
-        }
-        return m.replaceAll("\\s*\\R\\s*", " ").replaceAll("\\s*at \\[row,col.*$", "").strip();
+        return SafeXml.clean(e);
     }
 
     private ModelView toView(SBMLDocument doc, RecordingEventReader rec, String displayPath) {
