@@ -15,11 +15,6 @@ import io.github.atomledger.checker.engine.ModelResult;
 import io.github.atomledger.checker.engine.ReactionResult;
 import io.github.atomledger.checker.engine.RunResult;
 
-import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.util.DefaultIndenter;
-import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -41,10 +36,6 @@ public final class JsonReporter implements Reporter {
     /** Bumped on any change of the report's shape. */
     public static final String SCHEMA_VERSION = "1.0";
 
-    private static final ObjectMapper MAPPER = new ObjectMapper()
-            .configure(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS, false)
-            .configure(JsonGenerator.Feature.AUTO_CLOSE_TARGET, false);
-
     @Override
     public ReportFormat format() {
         return ReportFormat.JSON;
@@ -59,10 +50,7 @@ public final class JsonReporter implements Reporter {
 
     /** The report as a string, exactly the bytes {@link #write} puts in the file. */
     public String toJson(RunResult result) throws IOException {
-        DefaultPrettyPrinter printer = new DefaultPrettyPrinter()
-                .withObjectIndenter(new DefaultIndenter("  ", "\n"))
-                .withArrayIndenter(new DefaultIndenter("  ", "\n"));
-        return MAPPER.writer(printer).writeValueAsString(tree(result)) + "\n";
+        return JsonText.of(tree(result));
     }
 
     static Map<String, Object> tree(RunResult result) {

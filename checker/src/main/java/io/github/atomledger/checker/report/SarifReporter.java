@@ -7,11 +7,6 @@ import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.check.StandardChecks;
 import io.github.atomledger.checker.engine.RunResult;
 
-import com.fasterxml.jackson.core.JsonGenerator;
-import com.fasterxml.jackson.core.util.DefaultIndenter;
-import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import java.io.IOException;
 import java.net.URI;
@@ -38,10 +33,6 @@ public final class SarifReporter implements Reporter {
     public static final String SCHEMA_URI = "https://json.schemastore.org/sarif-2.1.0.json";
     static final String BASE_ID = "%SRCROOT%";
 
-    private static final ObjectMapper MAPPER = new ObjectMapper()
-            .configure(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS, false)
-            .configure(JsonGenerator.Feature.AUTO_CLOSE_TARGET, false);
-
     @Override
     public ReportFormat format() {
         return ReportFormat.SARIF;
@@ -56,10 +47,7 @@ public final class SarifReporter implements Reporter {
 
     /** The log, exactly the bytes {@link #write} puts in the file. */
     public String toSarif(RunResult result) throws IOException {
-        DefaultPrettyPrinter printer = new DefaultPrettyPrinter()
-                .withObjectIndenter(new DefaultIndenter("  ", "\n"))
-                .withArrayIndenter(new DefaultIndenter("  ", "\n"));
-        return MAPPER.writer(printer).writeValueAsString(tree(result)) + "\n";
+        return JsonText.of(tree(result));
     }
 
     static Map<String, Object> tree(RunResult result) {
