@@ -22,11 +22,10 @@ public final class MoleculeGraph {
     private final String[] elements;
     private final int[][] neighbours;
     private final int[][] bondCodes;
-    private final java.util.function.Supplier<int[]> orbit;
+    private final int[] orbit;
     private final int[] hydrogens;
 
-    MoleculeGraph(String[] elements, int[][] neighbours, int[][] bondCodes, java.util.function.Supplier<int[]> orbit,
-                  int[] hydrogens) {
+    MoleculeGraph(String[] elements, int[][] neighbours, int[][] bondCodes, int[] orbit, int[] hydrogens) {
         this.elements = elements;
         this.hydrogens = hydrogens;
         this.neighbours = neighbours;
@@ -66,11 +65,16 @@ public final class MoleculeGraph {
     }
 
     /**
-     * Automorphism class of atom {@code i}: the smallest atom number in its orbit. Two atoms with
-     * the same class are exchanged by some automorphism that keeps elements and bond codes (from
-     * CDK's partition refinement; stereo and charge are not looked at).
+     * Automorphism class of atom {@code i}: the smallest atom number in its orbit. Two atoms have
+     * the same class exactly when some automorphism of this graph that keeps elements and bond
+     * codes maps one onto the other; stereo, charges and hydrogens are not looked at. The classes
+     * are exact, neither coarser nor finer than the orbits (computed by colour refinement and an
+     * individualisation–refinement search after McKay 1981, when the structure is read), and
+     * deterministic: the same graph in the same atom order gives the same numbers. A structure
+     * whose symmetry needs more than a fixed number of steps to analyse is refused when it is
+     * read, so every graph has its exact orbits.
      */
     public int orbit(int i) {
-        return orbit.get()[i];
+        return orbit[i];
     }
 }

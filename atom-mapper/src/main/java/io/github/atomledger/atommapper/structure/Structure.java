@@ -84,7 +84,9 @@ public final class Structure {
     /**
      * Parses a SMILES string (OpenSMILES; aromatic input is kekulised by CDK).
      *
-     * @throws StructureException when the text is empty or not valid SMILES; the message quotes it
+     * @throws StructureException when the text is empty or not valid SMILES, or when the symmetry
+     *     of the molecule is too complex to analyse within a fixed number of steps (see
+     *     {@link MoleculeGraph#orbit}); the message quotes the text
      */
     public static Structure fromSmiles(String smiles) throws StructureException {
         Objects.requireNonNull(smiles, "smiles");
@@ -102,8 +104,9 @@ public final class Structure {
     /**
      * Parses a standard or non-standard InChI through CDK's InChI bindings (a native library).
      *
-     * @throws StructureException when the InChI is not valid, or when the native InChI library
-     *     cannot be loaded on this machine (the message then says so)
+     * @throws StructureException when the InChI is not valid, when the native InChI library
+     *     cannot be loaded on this machine (the message then says so), or when the symmetry of the
+     *     molecule is too complex to analyse within a fixed number of steps
      */
     public static Structure fromInchi(String inchi) throws StructureException {
         Objects.requireNonNull(inchi, "inchi");

@@ -2,38 +2,56 @@ package io.github.atomledger.atommapper.structure.internal;
 
 import io.github.atomledger.atommapper.structure.StructureException;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.function.Supplier;
 import org.openscience.cdk.aromaticity.Aromaticity;
 import org.openscience.cdk.aromaticity.ElectronDonation;
 import org.openscience.cdk.exception.CDKException;
 import org.openscience.cdk.graph.Cycles;
-import org.openscience.cdk.group.Permutation;
-import org.openscience.cdk.group.PermutationGroup;
-import org.openscience.cdk.group.PartitionRefinement;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.interfaces.IBond;
 import org.openscience.cdk.interfaces.IPseudoAtom;
-import org.openscience.cdk.isomorphism.AtomMatcher;
-import org.openscience.cdk.isomorphism.BondMatcher;
-import org.openscience.cdk.isomorphism.VentoFoggia;
-import org.openscience.cdk.silent.Atom;
-import org.openscience.cdk.silent.AtomContainer;
-import org.openscience.cdk.silent.PseudoAtom;
 import org.openscience.cdk.smiles.SmiFlavor;
 import org.openscience.cdk.smiles.SmilesGenerator;
 
 /**
  * Turns a parsed CDK container into the heavy-atom arrays of a {@code MoleculeGraph}, its
- * automorphism classes and canonical SMILES. Works on copies only; the input is not changed.
- * The automorphism classes and the canonical SMILES are computed on first use: they cost
- * milliseconds per molecule (partition refinement; InChI labelling for stereo), and a run that
- * takes every map from the cache never needs the classes.
+ * automorphism orbits and canonical SMILES. Works on copies only; the input is not changed.
+ * The orbits are computed here, so that a structure whose symmetry cannot be analysed is refused
+ * when it is read (see {@link #SYMMETRY_STEP_LIMIT}); they cost microseconds for a metabolite.
+ * The canonical SMILES is computed on first use: it costs milliseconds (InChI labelling for
+ * stereo), and a run that takes every map from the cache never needs it.
  */
-public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCodes, Supplier<int[]> orbits,
+public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCodes, int[] orbits,
                            int[] hydrogens, int[] heavyToAtom, Supplier<String> canonicalSmiles) {
+
+    /**
+     * Work limit of the orbit computation, in the steps of {@code StepBudget} (array elements
+     * scanned, sorted or written; deterministic, unlike a time limit). A structure that needs
+     * more is refused with a {@link StructureException}, which the checker reports as
+     * {@code structure.invalid}.
+     *
+     * <p>Why refuse rather than fall back to something cheaper: the cheap stand-ins are
+     * partitions coarser or finer than the true orbits, and neither is harmless. Coarser classes
+     * (the colour-refinement cells alone) let {@code Search} try one atom per class as the image
+     * in an untouched product molecule, so it could skip an image that no automorphism relates to
+     * the one tried, miss the optimum and still call it proven. Finer classes keep the search
+     * exact (it only tries more images), but they change what is reported:
+     * {@code AtomMapper.sameUpToSymmetry}, the phase-2 class keys and the status would tell
+     * symmetric maps apart, and {@code Prochirality} would miss centres whose two branches no
+     * longer share a class. Measured with every atom alone: ten reactions of the mapping tests
+     * (citrate synthase, aconitase, succinate dehydrogenase and fumarase among them) turn from
+     * "mapped" to "ambiguous" with a spurious alternative. So neither is safe, and a structure
+     * whose symmetry cannot be analysed is refused.
+     *
+     * <p>The value: a yeast-GEM molecule needs at most about 6 000 steps (mean under 1 000); the
+     * hostile inputs of {@code SymmetricStructureTest} at most about 850 000 (polyisobutylene of
+     * 200 units, 601 atoms); a 600-atom Cai–Fürer–Immerman graph about 7 million. Twenty million
+     * steps take a few tenths of a second, and a polyisobutylene of 1 500 units (4 501 atoms) is
+     * refused.
+     */
+    public static final long SYMMETRY_STEP_LIMIT = 20_000_000L;
 
 
     /** Builds the arrays from {@code parsed}; {@code source} only names the input in errors. */
@@ -62,18 +80,12 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
         int n = heavy.size();
         String[] elements = new String[n];
         int[] hydrogens = new int[n];
-        IAtomContainer symmetryCopy = new AtomContainer();
         for (int k = 0; k < n; k++) {
             IAtom a = mol.getAtom(heavy.get(k));
             boolean pseudo = a instanceof IPseudoAtom || a.getAtomicNumber() == null
                     || a.getAtomicNumber() == 0;
             elements[k] = pseudo ? "R" : a.getSymbol();
             hydrogens[k] = a.getImplicitHydrogenCount() == null ? 0 : a.getImplicitHydrogenCount();
-            // Charges and hydrogens are left out: the cost of a map does not look at them.
-            IAtom s = pseudo ? new PseudoAtom("R") : new Atom(a.getSymbol());
-            s.setFormalCharge(0);
-            s.setImplicitHydrogenCount(0);
-            symmetryCopy.addAtom(s);
         }
         List<List<int[]>> adj = new ArrayList<>();
         for (int k = 0; k < n; k++) {
@@ -91,10 +103,6 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
             int code = code(b);
             adj.get(u).add(new int[] {v, code});
             adj.get(v).add(new int[] {u, code});
-            // A bond order no organic input uses stands for "aromatic" in the symmetry copy, so
-            // that the two Kekule forms of a ring do not hide its flip symmetry.
-            symmetryCopy.addBond(u, v, code == 4 ? IBond.Order.QUADRUPLE : b.getOrder() == null
-                    || b.getOrder() == IBond.Order.UNSET ? IBond.Order.SINGLE : b.getOrder());
         }
         int[][] neighbours = new int[n][];
         int[][] codes = new int[n][];
@@ -104,20 +112,19 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
             neighbours[k] = list.stream().mapToInt(e -> e[0]).toArray();
             codes[k] = list.stream().mapToInt(e -> e[1]).toArray();
         }
-        refuseCrowdedAtoms(neighbours, source);
-        Supplier<int[]> orbits = new Lazy<>(() -> orbits(symmetryCopy, n));
+        int[] orbits;
+        try {
+            // Element and bond code only: charges and hydrogens are left out, as in the cost of
+            // a map, and aromatic bonds have a code of their own, so that the two Kekulé forms of
+            // a ring do not hide its flip symmetry.
+            orbits = Orbits.of(elements, neighbours, codes, new StepBudget(SYMMETRY_STEP_LIMIT));
+        } catch (StepBudget.Exhausted e) {
+            throw new StructureException("symmetry of '" + source + "' is too complex to analyse within "
+                    + SYMMETRY_STEP_LIMIT + " steps (" + n + " heavy atoms)", e);
+        }
         Supplier<String> canonical = new Lazy<>(() -> canonicalOf(mol, source));
         return new GraphBuilder(elements, neighbours, codes, orbits, hydrogens,
                 heavy.stream().mapToInt(Integer::intValue).toArray(), canonical);
-    }
-
-    private static int[] orbits(IAtomContainer symmetryCopy, int n) {
-        int[] orbits = new int[n];
-        Arrays.setAll(orbits, i -> i);
-        if (n > 1) {
-            orbits = orbitsByPiece(symmetryCopy);
-        }
-        return orbits;
     }
 
     private static String canonicalOf(IAtomContainer mol, String source) {
@@ -129,142 +136,6 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
         }
         // Last resort, never seen on real input: the input text, which is at least deterministic.
         return canonical != null ? canonical : "input:" + source;
-    }
-
-    /**
-     * Most heavy-atom neighbours one atom may have. CDK's exact symmetry computation grows
-     * steeply with the number of interchangeable neighbours (twelve methyls on one atom: under a
-     * second; sixty: minutes), and no metabolite comes near (coordination numbers above twelve
-     * are rare even in inorganic chemistry; common practice).
-     */
-    static final int MAX_NEIGHBOURS = 12;
-
-    private static void refuseCrowdedAtoms(int[][] neighbours, String source) throws StructureException {
-        for (int k = 0; k < neighbours.length; k++) {
-            if (neighbours[k].length > MAX_NEIGHBOURS) {
-                throw new StructureException("cannot analyse '" + source + "': atom " + (k + 1) + " has "
-                        + neighbours[k].length + " bonds to heavy atoms, more than " + MAX_NEIGHBOURS);
-            }
-        }
-    }
-
-    /**
-     * Automorphism orbits computed per connected piece, joined across identical pieces by one
-     * isomorphism each: exactly the orbits of the whole graph (its automorphisms are those of the
-     * pieces and exchanges of identical pieces), without asking CDK for the symmetry of many
-     * identical pieces at once, which takes minutes for a dozen benzenes.
-     */
-    private static int[] orbitsByPiece(IAtomContainer symmetryCopy) {
-        int n = symmetryCopy.getAtomCount();
-        int[] parent = new int[n];
-        Arrays.setAll(parent, i -> i);
-        for (IBond b : symmetryCopy.bonds()) {
-            union(parent, b.getBegin().getIndex(), b.getEnd().getIndex());
-        }
-        java.util.Map<Integer, List<Integer>> pieces = new java.util.TreeMap<>();
-        for (int k = 0; k < n; k++) {
-            pieces.computeIfAbsent(root(parent, k), r -> new ArrayList<>()).add(k);
-        }
-        Arrays.setAll(parent, i -> i);
-        List<int[]> repAtoms = new ArrayList<>();
-        List<IAtomContainer> repContainers = new ArrayList<>();
-        for (List<Integer> atoms : pieces.values()) {
-            int[] global = atoms.stream().mapToInt(Integer::intValue).toArray();
-            IAtomContainer piece = piece(symmetryCopy, global);
-            if (global.length > 1) {
-                PermutationGroup group = PartitionRefinement.forAtoms().create().getAutomorphismGroup(piece);
-                int[] local = orbits(group, global.length);
-                for (int i = 0; i < global.length; i++) {
-                    union(parent, global[i], global[local[i]]);
-                }
-            }
-            boolean matched = false;
-            for (int r = 0; r < repContainers.size() && !matched; r++) {
-                int[] rep = repAtoms.get(r);
-                if (rep.length != global.length) {
-                    continue;
-                }
-                int[] iso = VentoFoggia.findIdentical(repContainers.get(r), AtomMatcher.forElement(),
-                        BondMatcher.forOrder()).match(piece);
-                if (iso.length == rep.length) {
-                    for (int i = 0; i < rep.length; i++) {
-                        union(parent, rep[i], global[iso[i]]);
-                    }
-                    matched = true;
-                }
-            }
-            if (!matched) {
-                repAtoms.add(global);
-                repContainers.add(piece);
-            }
-        }
-        int[] orbits = new int[n];
-        for (int k = 0; k < n; k++) {
-            orbits[k] = root(parent, k);
-        }
-        return orbits;
-    }
-
-    private static IAtomContainer piece(IAtomContainer all, int[] atoms) {
-        IAtomContainer piece = new AtomContainer();
-        java.util.Map<Integer, Integer> local = new java.util.HashMap<>();
-        for (int i = 0; i < atoms.length; i++) {
-            IAtom a = all.getAtom(atoms[i]);
-            IAtom c = a instanceof IPseudoAtom ? new PseudoAtom("R") : new Atom(a.getSymbol());
-            c.setFormalCharge(0);
-            c.setImplicitHydrogenCount(0);
-            piece.addAtom(c);
-            local.put(atoms[i], i);
-        }
-        for (IBond b : all.bonds()) {
-            Integer u = local.get(b.getBegin().getIndex());
-            Integer v = local.get(b.getEnd().getIndex());
-            if (u != null && v != null) {
-                piece.addBond(u, v, b.getOrder());
-            }
-        }
-        return piece;
-    }
-
-    private static void union(int[] parent, int x, int y) {
-        int a = root(parent, x);
-        int b = root(parent, y);
-        parent[Math.max(a, b)] = Math.min(a, b);
-    }
-
-    /**
-     * The orbits of an automorphism group, each atom labelled by the smallest atom of its orbit:
-     * the classes joined by the permutations stored in the group's Schreier-Sims table, which
-     * generate the group. (CDK's getAutomorphismPartition enumerates every group element instead,
-     * which never ends for inputs like twenty disconnected methanes, order 20!.)
-     */
-    private static int[] orbits(PermutationGroup group, int n) {
-        int[] parent = new int[n];
-        Arrays.setAll(parent, i -> i);
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                Permutation p = group.get(i, j);
-                if (p == null) {
-                    continue;
-                }
-                for (int k = 0; k < n; k++) {
-                    union(parent, k, p.get(k));
-                }
-            }
-        }
-        int[] orbits = new int[n];
-        for (int k = 0; k < n; k++) {
-            orbits[k] = root(parent, k);
-        }
-        return orbits;
-    }
-
-    private static int root(int[] parent, int k) {
-        while (parent[k] != k) {
-            parent[k] = parent[parent[k]];
-            k = parent[k];
-        }
-        return k;
     }
 
     private static String canonical(IAtomContainer mol, int flavor) {
