@@ -40,19 +40,19 @@ public record GraphBuilder(String[] elements, int[][] neighbours, int[][] bondCo
      * exact (it only tries more images), but they change what is reported:
      * {@code AtomMapper.sameUpToSymmetry}, the phase-2 class keys and the status would tell
      * symmetric maps apart, and {@code Prochirality} would miss centres whose two branches no
-     * longer share a class. Measured with every atom alone: ten reactions of the mapping tests
-     * (citrate synthase, aconitase, succinate dehydrogenase and fumarase among them) turn from
-     * "mapped" to "ambiguous" with a spurious alternative. So neither is safe, and a structure
-     * whose symmetry cannot be analysed is refused.
+     * longer share a class. Measured with every atom alone: nine reactions of the mapping tests
+     * (citrate synthase, aconitase, succinate dehydrogenase, fumarase and phenylalanine
+     * hydroxylase among them) turn from "mapped" to "ambiguous" with a spurious alternative, and
+     * {@code sameUpToSymmetry} tells the two ends of succinate apart. So neither is safe, and a
+     * structure whose symmetry cannot be analysed is refused.
      *
      * <p>The value: a yeast-GEM molecule needs at most about 6 000 steps (mean under 1 000); the
-     * hostile inputs of {@code SymmetricStructureTest} at most about 850 000 (polyisobutylene of
+     * hostile inputs of {@code SymmetricStructureTest} at most about 630 000 (polyisobutylene of
      * 200 units, 601 atoms); a 600-atom Cai–Fürer–Immerman graph about 7 million. Twenty million
      * steps take a few tenths of a second, and a polyisobutylene of 1 500 units (4 501 atoms) is
      * refused.
      */
     public static final long SYMMETRY_STEP_LIMIT = 20_000_000L;
-
 
     /** Builds the arrays from {@code parsed}; {@code source} only names the input in errors. */
     public static GraphBuilder build(IAtomContainer parsed, String source) throws StructureException {

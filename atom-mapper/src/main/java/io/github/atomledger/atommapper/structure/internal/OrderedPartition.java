@@ -194,9 +194,10 @@ final class OrderedPartition {
 
     /** Reverts the last {@link #individualise} not yet reverted. */
     void undo() throws StepBudget.Exhausted {
-        budget.spend(log.undoTo(arrays));
-        cells = log.savedCells();
-        trace = log.savedTrace();
+        budget.spend(log.sinceMark());
+        UndoLog.Mark mark = log.undo(arrays);
+        cells = mark.cells();
+        trace = mark.trace();
     }
 
     private void refine() throws StepBudget.Exhausted {

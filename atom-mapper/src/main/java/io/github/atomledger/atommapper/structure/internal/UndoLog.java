@@ -1,5 +1,6 @@
 package io.github.atomledger.atommapper.structure.internal;
 
+import java.util.ArrayDeque;
 import java.util.Arrays;
 
 /**
@@ -9,65 +10,46 @@ import java.util.Arrays;
  */
 final class UndoLog {
 
-    private int[] which = new int[64];
-    private int[] index = new int[64];
-    private int[] old = new int[64];
-    private int size;
-    private int[] markSize = new int[16];
-    private int[] markCells = new int[16];
-    private long[] markTrace = new long[16];
-    private int marks;
-    private int lastCells;
-    private long lastTrace;
+    /** The state of the partition when a mark was set. */
+    record Mark(int size, int cells, long trace) {
+    }
 
-    void record(int array, int i, int value) {
-        if (size == old.length) {
-            which = Arrays.copyOf(which, size * 2);
-            index = Arrays.copyOf(index, size * 2);
-            old = Arrays.copyOf(old, size * 2);
+    /** Three ints per write: which array, which index, the old value. */
+    private int[] entries = new int[3 * 64];
+    private int size;
+    private final ArrayDeque<Mark> marks = new ArrayDeque<>();
+
+    void record(int array, int index, int old) {
+        if (3 * size == entries.length) {
+            entries = Arrays.copyOf(entries, 2 * entries.length);
         }
-        which[size] = array;
-        index[size] = i;
-        old[size] = value;
+        entries[3 * size] = array;
+        entries[3 * size + 1] = index;
+        entries[3 * size + 2] = old;
         size++;
     }
 
     void mark(int cells, long trace) {
-        if (marks == markSize.length) {
-            markSize = Arrays.copyOf(markSize, marks * 2);
-            markCells = Arrays.copyOf(markCells, marks * 2);
-            markTrace = Arrays.copyOf(markTrace, marks * 2);
-        }
-        markSize[marks] = size;
-        markCells[marks] = cells;
-        markTrace[marks] = trace;
-        marks++;
+        marks.push(new Mark(size, cells, trace));
     }
 
-    /** Restores the arrays to the last mark and drops it; returns the number of writes undone. */
-    int undoTo(int[][] arrays) {
-        marks--;
-        int target = markSize[marks];
-        int undone = size - target;
-        while (size > target) {
+    /** Restores the arrays to the last mark and returns that mark, which is dropped. */
+    Mark undo(int[][] arrays) {
+        Mark mark = marks.pop();
+        while (size > mark.size()) {
             size--;
-            arrays[which[size]][index[size]] = old[size];
+            arrays[entries[3 * size]][entries[3 * size + 1]] = entries[3 * size + 2];
         }
-        lastCells = markCells[marks];
-        lastTrace = markTrace[marks];
-        return undone;
+        return mark;
     }
 
-    int savedCells() {
-        return lastCells;
-    }
-
-    long savedTrace() {
-        return lastTrace;
+    /** Writes recorded since the last mark. */
+    int sinceMark() {
+        return marks.isEmpty() ? size : size - marks.peek().size();
     }
 
     void clear() {
         size = 0;
-        marks = 0;
+        marks.clear();
     }
 }
