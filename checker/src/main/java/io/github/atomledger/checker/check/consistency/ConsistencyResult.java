@@ -21,17 +21,22 @@ import java.util.TreeSet;
  *                     empty when consistent
  * @param net          the net stoichiometry of {@code fluxes} (species to exact amount, only
  *                     non-zero entries)
- * @param verification "exact" when the verdict was re-checked in rational arithmetic (a mass
- *                     vector with Sᵀm = 0 for a consistent network; for an inconsistent one, every
- *                     unconserved metabolite is in the net output of a verified leak combination
- *                     and the last LP found no further one); "exact-partial" when the leak
- *                     combinations are verified but the search stopped at its round budget (the
- *                     list may be incomplete); "floating-point" when only the LP solver's answer
- *                     stands; "undecided" when the solver ran out of its time budget
+ * @param verification {@value #EXACT} when both sides were proven in rational arithmetic: an
+ *                     exact conserved mass vector covers every other metabolite and an exact leak
+ *                     makes every unconserved one; {@value #EXACT_PARTIAL} when the unconserved
+ *                     ones are proven by an exact leak but some others rest on the LP solver's
+ *                     word that no leak makes them; {@value #FLOATING_POINT} when only the solver's
+ *                     answer stands; {@value #UNDECIDED} when a solve ran out of its time budget
+ *                     (no verdict: {@link #consistent()} is then true but means nothing)
  */
 public record ConsistencyResult(int metabolites, int reactions, SortedSet<String> unconserved,
                                 SortedMap<String, Rational> fluxes, SortedMap<String, Rational> net,
                                 String verification) {
+
+    public static final String EXACT = "exact";
+    public static final String EXACT_PARTIAL = "exact-partial";
+    public static final String FLOATING_POINT = "floating-point";
+    public static final String UNDECIDED = "undecided";
 
     public ConsistencyResult {
         unconserved = Collections.unmodifiableSortedSet(new TreeSet<>(unconserved));
@@ -42,6 +47,11 @@ public record ConsistencyResult(int metabolites, int reactions, SortedSet<String
     /** True when no unconserved metabolite was found (also when undecided). */
     public boolean consistent() {
         return unconserved.isEmpty();
+    }
+
+    /** True when the solver ran out of its budget before a verdict. */
+    public boolean undecided() {
+        return UNDECIDED.equals(verification);
     }
 
     /** The reactions of {@link #fluxes()}, sorted. */

@@ -41,9 +41,9 @@ class MassConsistencyCheckTest {
 
     @Test
     void roundsSolverNumbersToNearbyFractions() {
-        assertThat(StoichiometricConsistency.nearbyFraction(0.3333333333)).isEqualTo(Rational.of(1, 3));
-        assertThat(StoichiometricConsistency.nearbyFraction(500.0 / 633)).isEqualTo(Rational.of(500, 633));
-        assertThat(StoichiometricConsistency.nearbyFraction(-2.5)).isEqualTo(Rational.parse("-5/2"));
-        assertThat(StoichiometricConsistency.nearbyFraction(1e-12)).isEqualTo(Rational.ZERO);
+        assertThat(Lp.nearbyFraction(0.3333333333)).isEqualTo(Rational.of(1, 3));
+        assertThat(Lp.nearbyFraction(500.0 / 633)).isEqualTo(Rational.of(500, 633));
+        assertThat(Lp.nearbyFraction(-2.5)).isEqualTo(Rational.parse("-5/2"));
+        assertThat(Lp.nearbyFraction(1e-12)).isEqualTo(Rational.ZERO);
     }
 }
