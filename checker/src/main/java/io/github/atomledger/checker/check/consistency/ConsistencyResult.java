@@ -15,31 +15,31 @@ import java.util.TreeSet;
  * @param metabolites  metabolites in the tested network (non-boundary species of internal reactions)
  * @param reactions    internal reactions tested
  * @param unconserved  metabolites that no strictly positive conserved mass vector can cover,
- *                     sorted; empty when the network is consistent
+ *                     sorted, each proven by an exact leak; empty when the network is consistent
+ * @param undetermined metabolites whose status could not be proven either way (neither an exact
+ *                     leak nor an exact mass vector was found), sorted; empty unless partial
  * @param fluxes       a small combination of reactions (reaction id to exact coefficient) whose
  *                     net stoichiometry is non-negative and not zero: it makes matter from nothing;
  *                     empty when consistent
  * @param net          the net stoichiometry of {@code fluxes} (species to exact amount, only
  *                     non-zero entries)
- * @param verification {@value #EXACT} when both sides were proven in rational arithmetic: an
- *                     exact conserved mass vector covers every other metabolite and an exact leak
- *                     makes every unconserved one; {@value #EXACT_PARTIAL} when the unconserved
- *                     ones are proven by an exact leak but some others rest on the LP solver's
- *                     word that no leak makes them; {@value #FLOATING_POINT} when only the solver's
- *                     answer stands; {@value #UNDECIDED} when a solve ran out of its time budget
- *                     (no verdict: {@link #consistent()} is then true but means nothing)
+ * @param verification {@value #EXACT} when every metabolite was proven in rational arithmetic:
+ *                     exact conserved mass vectors cover the conserved ones and an exact leak makes
+ *                     every unconserved one; {@value #PARTIAL} when some are {@code undetermined};
+ *                     {@value #UNDECIDED} when a solve ran out of its time budget (no verdict:
+ *                     {@link #consistent()} is then true but means nothing)
  */
-public record ConsistencyResult(int metabolites, int reactions, SortedSet<String> unconserved,
+public record ConsistencyResult(int metabolites, int reactions, SortedSet<String> unconserved, SortedSet<String> undetermined,
                                 SortedMap<String, Rational> fluxes, SortedMap<String, Rational> net,
                                 String verification) {
 
     public static final String EXACT = "exact";
-    public static final String EXACT_PARTIAL = "exact-partial";
-    public static final String FLOATING_POINT = "floating-point";
+    public static final String PARTIAL = "partial";
     public static final String UNDECIDED = "undecided";
 
     public ConsistencyResult {
         unconserved = Collections.unmodifiableSortedSet(new TreeSet<>(unconserved));
+        undetermined = Collections.unmodifiableSortedSet(new TreeSet<>(undetermined));
         fluxes = Collections.unmodifiableSortedMap(new TreeMap<>(fluxes));
         net = Collections.unmodifiableSortedMap(new TreeMap<>(net));
     }

@@ -52,22 +52,16 @@ final class LeakSearch {
 
     private final InternalNetwork network;
     private final Set<Integer> conserved;
-    private final long budgetMillis;
+    private final Lp.Budget budget;
     private final List<Lump> lumps;
     private Elimination elimination;
     private boolean undecided;
-    private final TreeSet<Integer> suggested = new TreeSet<>();
 
-    LeakSearch(InternalNetwork network, Set<Integer> conserved, long budgetMillis) {
+    LeakSearch(InternalNetwork network, Set<Integer> conserved, Lp.Budget budget) {
         this.network = network;
         this.conserved = conserved;
-        this.budgetMillis = budgetMillis;
+        this.budget = budget;
         this.lumps = compress();
-    }
-
-    /** The open species the solver's last leak made, whether or not it passed the exact check. */
-    TreeSet<Integer> suggested() {
-        return suggested;
     }
 
     /** True when an LP ran out of its budget. */
@@ -81,8 +75,9 @@ final class LeakSearch {
      */
     Leak covering() {
         List<Map<Integer, Rational>> rows = reduced();
-        Lp lp = new Lp(budgetMillis);
-        Map<Integer, int[]> split = splitVariables(lp, rows, 0);
+        Lp lp = new Lp(budget);
+        // A tiny cost on the flux keeps the solver's numbers small; it cannot outweigh one k.
+        Map<Integer, int[]> split = splitVariables(lp, rows, -1e-7);
         for (Map<Integer, Rational> row : rows) {
             if (row.isEmpty()) {
                 continue;
@@ -102,7 +97,7 @@ final class LeakSearch {
      */
     Leak small() {
         List<Map<Integer, Rational>> rows = reduced();
-        Lp lp = new Lp(budgetMillis);
+        Lp lp = new Lp(budget);
         Map<Integer, int[]> split = new TreeMap<>();
         Set<Integer> used = new TreeSet<>();
         rows.forEach(row -> used.addAll(row.keySet()));
@@ -275,12 +270,9 @@ final class LeakSearch {
             return null;
         }
         List<Map<Integer, Rational>> equations = new ArrayList<>();
-        suggested.clear();
         rowOf.forEach((i, row) -> {
             if (conserved.contains(i) || Math.abs(made.get(i)) <= 1e-7 * most) {
                 equations.add(row);
-            } else if (made.get(i) > 0) {
-                suggested.add(i);
             }
         });
         Elimination e = Elimination.of(equations, List.of());

@@ -36,8 +36,20 @@ final class Lp {
     private final ExpressionsBasedModel model = new ExpressionsBasedModel();
     private final List<Variable> variables = new ArrayList<>();
 
-    Lp(long budgetMillis) {
-        model.options.time_abort = budgetMillis;
+    /**
+     * How long one solve may take: wall-clock milliseconds, and simplex iterations (a limit that
+     * does not depend on the machine, for tests; 0 means ojAlgo's default).
+     */
+    record Budget(long millis, int iterations) {
+
+        static final Budget DEFAULT = new Budget(StoichiometricConsistency.LP_TIME_BUDGET_MS, 0);
+    }
+
+    Lp(Budget budget) {
+        model.options.time_abort = budget.millis();
+        if (budget.iterations() > 0) {
+            model.options.iterations_abort = budget.iterations();
+        }
     }
 
     /** Adds a variable with {@code lower ≤ x ≤ upper} (upper null: unbounded) and objective weight; returns its index. */

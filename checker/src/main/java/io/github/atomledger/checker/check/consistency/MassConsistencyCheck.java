@@ -42,19 +42,21 @@ public final class MassConsistencyCheck implements ModelCheck {
     private static final StoichiometricConsistency ANALYSIS = new StoichiometricConsistency();
 
     private final boolean undecided;
+    private final StoichiometricConsistency analysis;
 
-    private MassConsistencyCheck(boolean undecided) {
+    MassConsistencyCheck(boolean undecided, StoichiometricConsistency analysis) {
         this.undecided = undecided;
+        this.analysis = analysis;
     }
 
     /** {@code balance.mass-inconsistent}. */
     public static MassConsistencyCheck inconsistent() {
-        return new MassConsistencyCheck(false);
+        return new MassConsistencyCheck(false, ANALYSIS);
     }
 
     /** {@code balance.consistency-undecided}. */
     public static MassConsistencyCheck undecided() {
-        return new MassConsistencyCheck(true);
+        return new MassConsistencyCheck(true, ANALYSIS);
     }
 
     @Override
@@ -64,7 +66,7 @@ public final class MassConsistencyCheck implements ModelCheck {
 
     @Override
     public String description() {
-        return undecided ? "The stoichiometric consistency test ran out of its time budget; nothing is known."
+        return undecided ? "The stoichiometric consistency test could not settle every metabolite (time budget, or no exact proof)."
                 : "The internal reactions cannot all conserve any positive mass assignment (stoichiometric inconsistency).";
     }
 
@@ -75,18 +77,9 @@ public final class MassConsistencyCheck implements ModelCheck {
 
     @Override
     public List<Finding> check(CheckContext context) {
-        ConsistencyResult r = context.shared(ConsistencyResult.class, () -> ANALYSIS.analyse(context));
+        ConsistencyResult r = context.shared(ConsistencyResult.class, () -> analysis.analyse(context));
         if (undecided) {
-            if (!r.undecided()) {
-                return List.of();
-            }
-            Map<String, String> data = new TreeMap<>();
-            data.put("metabolites", Integer.toString(r.metabolites()));
-            data.put("reactions", Integer.toString(r.reactions()));
-            data.put("budgetMs", Long.toString(StoichiometricConsistency.LP_TIME_BUDGET_MS));
-            return List.of(context.finding(this, context.model().modelId(), 0, "The stoichiometric consistency of "
-                    + r.reactions() + " internal reactions over " + r.metabolites() + " metabolites could not be decided"
-                    + " within the solver's budget of " + StoichiometricConsistency.LP_TIME_BUDGET_MS + " ms per LP.", data));
+            return r.undecided() || !r.undetermined().isEmpty() ? List.of(undecidedFinding(context, r)) : List.of();
         }
         if (r.consistent()) {
             return List.of();
@@ -100,12 +93,29 @@ public final class MassConsistencyCheck implements ModelCheck {
         data.put("fluxes", pairs(r.fluxes()));
         data.put("net", pairs(r.net()));
         data.put("verification", r.verification());
+        data.put("undetermined", String.join(",", r.undetermined()));
         String id = context.model().modelId();
         String message = "The internal reactions are stoichiometrically inconsistent: " + r.unconserved().size()
                 + " metabolite(s) cannot be given a conserved positive mass (" + shown(new ArrayList<>(r.unconserved()))
                 + "); reactions " + shown(r.causingReactions()) + " together make " + shown(describe(r.net()))
                 + " from nothing.";
         return List.of(context.finding(this, id, 0, message, data));
+    }
+
+    private Finding undecidedFinding(CheckContext context, ConsistencyResult r) {
+        Map<String, String> data = new TreeMap<>();
+        data.put("metabolites", Integer.toString(r.metabolites()));
+        data.put("reactions", Integer.toString(r.reactions()));
+        data.put("budgetMs", Long.toString(StoichiometricConsistency.LP_TIME_BUDGET_MS));
+        data.put("undeterminedCount", Integer.toString(r.undetermined().size()));
+        data.put("undetermined", String.join(",", r.undetermined()));
+        String message = r.undecided()
+                ? "The stoichiometric consistency of " + r.reactions() + " internal reactions over " + r.metabolites()
+                        + " metabolites could not be decided within the solver's budget of "
+                        + StoichiometricConsistency.LP_TIME_BUDGET_MS + " ms per LP."
+                : "The stoichiometric consistency of " + r.undetermined().size() + " metabolite(s) could not be proven either"
+                        + " way (" + shown(new ArrayList<>(r.undetermined())) + ").";
+        return context.finding(this, context.model().modelId(), 0, message, data);
     }
 
     private static String pairs(Map<String, Rational> m) {

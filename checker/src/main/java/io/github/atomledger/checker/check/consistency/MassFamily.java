@@ -61,7 +61,7 @@ final class MassFamily {
     }
 
     /** Searches the family for {@code network}, with an own mass for each species in {@code freed}. */
-    static Outcome search(InternalNetwork network, Set<Integer> freed, long budgetMillis) {
+    static Outcome search(InternalNetwork network, Set<Integer> freed, Lp.Budget budget) {
         int n = network.size();
         Map<String, Integer> elements = new TreeMap<>();
         for (int i = 0; i < n; i++) {
@@ -92,7 +92,7 @@ final class MassFamily {
         int variables = next;
         List<Map<Integer, Rational>> rows = rows(network, mass);
         Presolve pre = Presolve.of(variables, rows);
-        double[] x = solve(pre, variables, mass, budgetMillis);
+        double[] x = solve(pre, variables, mass, budget);
         if (x == null) {
             return new Outcome(Status.UNDECIDED, new TreeMap<>(), new TreeSet<>());
         }
@@ -130,13 +130,13 @@ final class MassFamily {
     }
 
     /** Largest-support LP on the presolved rows; the value of every family variable, or null when undecided. */
-    private static double[] solve(Presolve pre, int variables, List<Map<Integer, Rational>> mass, long budgetMillis) {
+    private static double[] solve(Presolve pre, int variables, List<Map<Integer, Rational>> mass, Lp.Budget budget) {
         double[] x = new double[variables];
         List<Integer> roots = pre.roots();
         if (roots.isEmpty()) {
             return x;
         }
-        Lp lp = new Lp(budgetMillis);
+        Lp lp = new Lp(budget);
         Map<Integer, Integer> column = new HashMap<>();
         for (int root : roots) {
             column.put(root, lp.variable(0, null, 0));

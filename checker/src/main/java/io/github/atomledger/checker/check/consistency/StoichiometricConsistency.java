@@ -27,7 +27,8 @@ import java.util.TreeSet;
  *       make, on the network compressed and reduced by exact elimination over the proven
  *       species; rebuilt and verified exactly. What it makes is proven unconserved.</li>
  *   <li>Species in neither set are conservable (no leak makes them) by vectors outside the family;
- *       the family is searched again with their masses freed to prove it.</li>
+ *       the family is searched again with their masses freed to prove it. Any that still lack a
+ *       proof are reported as undetermined, never guessed.</li>
  *   <li>For the report, a leak with few reactions: it names what to look at first.</li>
  * </ol>
  *
@@ -45,14 +46,14 @@ public final class StoichiometricConsistency {
     /** Wall-clock budget of one LP solve, in milliseconds. */
     static final long LP_TIME_BUDGET_MS = 5_000;
 
-    private final long budgetMillis;
+    private final Lp.Budget budget;
 
     public StoichiometricConsistency() {
-        this(LP_TIME_BUDGET_MS);
+        this(Lp.Budget.DEFAULT);
     }
 
-    StoichiometricConsistency(long budgetMillis) {
-        this.budgetMillis = budgetMillis;
+    StoichiometricConsistency(Lp.Budget budget) {
+        this.budget = budget;
     }
 
     /** Tests the internal network of the model in {@code context}. */
@@ -63,24 +64,25 @@ public final class StoichiometricConsistency {
     ConsistencyResult analyse(InternalNetwork network) {
         int n = network.size();
         if (n == 0) {
-            return result(network, Set.of(), null, ConsistencyResult.EXACT);
+            return result(network, Set.of(), Set.of(), null, ConsistencyResult.EXACT);
         }
-        MassFamily.Outcome family = MassFamily.search(network, Set.of(), budgetMillis);
+        MassFamily.Outcome family = MassFamily.search(network, Set.of(), budget);
         if (family.status() == MassFamily.Status.UNDECIDED) {
-            return result(network, Set.of(), null, ConsistencyResult.UNDECIDED);
+            return result(network, Set.of(), Set.of(), null, ConsistencyResult.UNDECIDED);
         }
-        boolean exact = family.status() == MassFamily.Status.EXACT;
-        Set<Integer> conserved = exact ? family.masses().keySet() : family.floatSupport();
+        // Only exact masses prove a species conservable; the leak search may lean on the solver's
+        // support, since every leak it reports is verified on its own.
+        TreeSet<Integer> conserved = new TreeSet<>(family.masses().keySet());
         if (conserved.size() == n) {
-            return result(network, Set.of(), null, exact ? ConsistencyResult.EXACT : ConsistencyResult.FLOATING_POINT);
+            return result(network, Set.of(), Set.of(), null, ConsistencyResult.EXACT);
         }
-        LeakSearch leaks = new LeakSearch(network, conserved, budgetMillis);
+        Set<Integer> assumed = family.status() == MassFamily.Status.EXACT ? conserved : family.floatSupport();
+        LeakSearch leaks = new LeakSearch(network, assumed, budget);
         LeakSearch.Leak cover = leaks.covering();
         if (cover == null && leaks.undecided()) {
-            return result(network, Set.of(), null, ConsistencyResult.UNDECIDED);
+            return result(network, Set.of(), Set.of(), null, ConsistencyResult.UNDECIDED);
         }
-        Set<Integer> unconserved = cover != null ? cover.net().keySet() : leaks.suggested();
-        exact &= cover != null || unconserved.isEmpty();
+        Set<Integer> unconserved = cover == null ? Set.of() : cover.net().keySet();
         TreeSet<Integer> rest = new TreeSet<>();
         for (int i = 0; i < n; i++) {
             if (!conserved.contains(i) && !unconserved.contains(i)) {
@@ -88,26 +90,21 @@ public final class StoichiometricConsistency {
             }
         }
         if (!rest.isEmpty()) {
-            // Not made by any leak, so conservable; prove it with their masses set free.
-            MassFamily.Outcome wider = MassFamily.search(network, rest, budgetMillis);
-            exact &= wider.status() == MassFamily.Status.EXACT && wider.masses().keySet().containsAll(rest);
+            // Made by no leak, so conservable by some vector; prove it with their masses set free.
+            MassFamily.Outcome wider = MassFamily.search(network, rest, budget);
+            rest.removeAll(wider.masses().keySet());
         }
-        if (unconserved.isEmpty()) {
-            return result(network, Set.of(), null, exact ? ConsistencyResult.EXACT : ConsistencyResult.FLOATING_POINT);
-        }
-        LeakSearch.Leak shown = cover == null ? null : leaks.small();
-        if (shown == null) {
-            shown = cover;
-        }
-        String verification = cover == null ? ConsistencyResult.FLOATING_POINT
-                : exact ? ConsistencyResult.EXACT : ConsistencyResult.EXACT_PARTIAL;
-        return result(network, unconserved, shown, verification);
+        LeakSearch.Leak shown = unconserved.isEmpty() ? null : leaks.small();
+        return result(network, unconserved, rest, shown == null ? cover : shown,
+                rest.isEmpty() ? ConsistencyResult.EXACT : ConsistencyResult.PARTIAL);
     }
 
-    private static ConsistencyResult result(InternalNetwork network, Set<Integer> unconserved, LeakSearch.Leak leak,
-                                            String verification) {
+    private static ConsistencyResult result(InternalNetwork network, Set<Integer> unconserved, Set<Integer> undetermined,
+                                            LeakSearch.Leak leak, String verification) {
         TreeSet<String> names = new TreeSet<>();
         unconserved.forEach(i -> names.add(network.species().get(i)));
+        TreeSet<String> unsettled = new TreeSet<>();
+        undetermined.forEach(i -> unsettled.add(network.species().get(i)));
         SortedMap<String, Rational> fluxes = new TreeMap<>();
         SortedMap<String, Rational> net = new TreeMap<>();
         if (leak != null) {
@@ -116,6 +113,6 @@ public final class StoichiometricConsistency {
             }
             leak.net().forEach((i, x) -> net.put(network.species().get(i), x));
         }
-        return new ConsistencyResult(network.size(), network.columns().size(), names, fluxes, net, verification);
+        return new ConsistencyResult(network.size(), network.columns().size(), names, unsettled, fluxes, net, verification);
     }
 }
