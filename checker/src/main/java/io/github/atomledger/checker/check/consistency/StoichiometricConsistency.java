@@ -27,8 +27,9 @@ import java.util.TreeSet;
  *       make, on the network compressed and reduced by exact elimination over the proven
  *       species; rebuilt and verified exactly. What it makes is proven unconserved.</li>
  *   <li>Species in neither set are conservable (no leak makes them) by vectors outside the family;
- *       the family is searched again with their masses freed to prove it. Any that still lack a
- *       proof are reported as undetermined, never guessed.</li>
+ *       the family is searched again with their masses freed, then their neighbours' too, until
+ *       they are proven (at worst with every mass free, the plain LP). Any that still lack a proof
+ *       (a solve ran out of budget) are reported as undetermined, never guessed.</li>
  *   <li>For the report, a leak with few reactions: it names what to look at first.</li>
  * </ol>
  *
@@ -89,14 +90,40 @@ public final class StoichiometricConsistency {
                 rest.add(i);
             }
         }
-        if (!rest.isEmpty()) {
-            // Made by no leak, so conservable by some vector; prove it with their masses set free.
-            MassFamily.Outcome wider = MassFamily.search(network, rest, budget);
-            rest.removeAll(wider.masses().keySet());
-        }
+        prove(network, rest);
         LeakSearch.Leak shown = unconserved.isEmpty() ? null : leaks.small();
         return result(network, unconserved, rest, shown == null ? cover : shown,
                 rest.isEmpty() ? ConsistencyResult.EXACT : ConsistencyResult.PARTIAL);
+    }
+
+    /**
+     * Species that no leak makes are conservable, but not by element weights (those are forced to
+     * zero by some imbalanced reaction). Frees their masses, then those of their neighbours (species
+     * sharing a reaction), widening until every one is proven or every mass is free (the plain LP
+     * of Gevorgyan et al.). Removes the proven ones from {@code rest}.
+     */
+    private void prove(InternalNetwork network, TreeSet<Integer> rest) {
+        TreeSet<Integer> freed = new TreeSet<>(rest);
+        while (!rest.isEmpty()) {
+            MassFamily.Outcome wider = MassFamily.search(network, freed, budget);
+            rest.removeAll(wider.masses().keySet());
+            if (wider.status() == MassFamily.Status.UNDECIDED || freed.size() == network.size()) {
+                return;
+            }
+            TreeSet<Integer> next = new TreeSet<>(freed);
+            for (InternalNetwork.Column c : network.columns()) {
+                if (c.entries().keySet().stream().anyMatch(freed::contains)) {
+                    next.addAll(c.entries().keySet());
+                }
+            }
+            if (next.size() == freed.size()) {
+                // Nothing links the rest to more species: free every mass.
+                for (int i = 0; i < network.size(); i++) {
+                    next.add(i);
+                }
+            }
+            freed = next;
+        }
     }
 
     private static ConsistencyResult result(InternalNetwork network, Set<Integer> unconserved, Set<Integer> undetermined,

@@ -47,6 +47,19 @@ class StoichiometricConsistencyTest {
     }
 
     @Test
+    void provesAProtonConservableWhenAnImbalancedNeighbourForcesItsElementWeightToZero() {
+        // Hexokinase written without its proton (H short by one) forces the weight of H to zero, so the proton
+        // weighs nothing in the element family; the network is still consistent (ATP and ADP can take masses of
+        // their own), and that must be proven, not left undetermined. Formulas from memory (pH 7 forms).
+        ConsistencyResult r = analyse(TinyNetworks.of(
+                "GLC=C6H12O6 ATP=C10H12N5O13P3 G6P=C6H11O9P ADP=C10H12N5O10P2 W=H2O PI=HO4P H=H",
+                "HEX: GLC + ATP -> G6P + ADP", "ATPM: ATP + W -> ADP + PI + H"));
+        assertThat(r.unconserved()).isEmpty();
+        assertThat(r.undetermined()).isEmpty();
+        assertThat(r.verification()).isEqualTo("exact");
+    }
+
+    @Test
     void givesFormulaLessSpeciesMassesOfTheirOwn() {
         ConsistencyResult r = analyse(TinyNetworks.of("A=C2H4O2 E X", "R1: A + E -> X", "R2: X -> A + E"));
         assertThat(r.unconserved()).isEmpty();
