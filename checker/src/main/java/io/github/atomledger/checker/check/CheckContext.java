@@ -19,6 +19,7 @@ public final class CheckContext {
     private final Map<String, SpeciesChemistry> chemistry;
     private final Map<String, ReactionBalance> balances;
     private final MappingData mapping;
+    private final java.util.concurrent.ConcurrentHashMap<Class<?>, Object> shared = new java.util.concurrent.ConcurrentHashMap<>();
 
     public CheckContext(ModelView model, Map<String, SpeciesChemistry> chemistry,
                         Map<String, ReactionBalance> balances) {
@@ -59,6 +60,21 @@ public final class CheckContext {
             throw new IllegalArgumentException("no reaction '" + reactionId + "' in " + model.file());
         }
         return b;
+    }
+
+    /**
+     * A value computed once per context and shared by the checks that report on it (for example
+     * one expensive analysis behind two rules); {@code compute} runs on first use only. The value
+     * must be immutable. Thread-safe.
+     */
+    public <T> T shared(Class<T> type, java.util.function.Supplier<T> compute) {
+        Object value = shared.get(type);
+        if (value == null) {
+            value = compute.get();
+            Object earlier = shared.putIfAbsent(type, value);
+            value = earlier != null ? earlier : value;
+        }
+        return type.cast(value);
     }
 
     /** A finding about this model with the check's rule id and default severity. */

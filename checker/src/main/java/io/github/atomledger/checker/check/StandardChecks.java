@@ -48,7 +48,8 @@ public final class StandardChecks {
                 new PolymerFormulaCheck(),
                 new ExemptReactionCheck(),
                 new ClassMismatchCheck(),
-                new MassConsistencyCheck(),
+                MassConsistencyCheck.inconsistent(),
+                MassConsistencyCheck.undecided(),
                 StructureFormulaCheck.mismatch(),
                 StructureFormulaCheck.protonation()));
         all.addAll(StructureSourceCheck.all());

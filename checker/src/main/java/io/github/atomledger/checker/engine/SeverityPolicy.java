@@ -1,5 +1,7 @@
 package io.github.atomledger.checker.engine;
 
+import io.github.atomledger.checker.check.consistency.MassConsistencyCheck;
+
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
@@ -124,6 +126,10 @@ public final class SeverityPolicy {
      * override could bring a finding back.
      */
     public boolean switchedOff(String ruleId) {
+        if (ruleId.equals(MassConsistencyCheck.UNDECIDED) && switchedOff(MassConsistencyCheck.INCONSISTENT)) {
+            // The undecided outcome belongs to the consistency test: switching the test off skips both.
+            return true;
+        }
         return OFF.equals(byRule.get(ruleId)) && (!ruleId.startsWith("balance.") || byClass.isEmpty());
     }
 

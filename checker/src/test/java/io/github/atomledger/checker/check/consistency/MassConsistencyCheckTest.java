@@ -2,9 +2,11 @@ package io.github.atomledger.checker.check.consistency;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import io.github.atomledger.atommapper.formula.Rational;
 import io.github.atomledger.checker.TestModels;
+import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.check.balance.BalanceCalculator;
+import io.github.atomledger.checker.model.ModelView;
 
 import org.junit.jupiter.api.Test;
 
@@ -40,10 +42,23 @@ class MassConsistencyCheckTest {
     }
 
     @Test
-    void roundsSolverNumbersToNearbyFractions() {
-        assertThat(StoichiometricConsistency.nearbyFraction(0.3333333333)).isEqualTo(Rational.of(1, 3));
-        assertThat(StoichiometricConsistency.nearbyFraction(500.0 / 633)).isEqualTo(Rational.of(500, 633));
-        assertThat(StoichiometricConsistency.nearbyFraction(-2.5)).isEqualTo(Rational.parse("-5/2"));
-        assertThat(StoichiometricConsistency.nearbyFraction(1e-12)).isEqualTo(Rational.ZERO);
+    void reportsAnExhaustedBudgetAsUndecidedAndNotAsInconsistent() {
+        ModelView model = TestModels.load("consistency/consistent.xml");
+        BalanceCalculator calc = new BalanceCalculator();
+        var chemistry = calc.chemistry(model);
+        CheckContext context = new CheckContext(model, chemistry, calc.balances(model, chemistry));
+        StoichiometricConsistency oneIteration = new StoichiometricConsistency(new Lp.Budget(60_000, 1));
+        assertThat(new MassConsistencyCheck(false, oneIteration).check(context)).isEmpty();
+        assertThat(new MassConsistencyCheck(true, oneIteration).check(context)).singleElement().satisfies(f -> {
+            assertThat(f.ruleId()).isEqualTo("balance.consistency-undecided");
+            assertThat(f.severity()).isEqualTo(Severity.WARNING);
+            assertThat(f.elementId()).isEqualTo("consistent");
+            assertThat(f.data()).containsEntry("metabolites", "5");
+        });
+    }
+
+    @Test
+    void aDecidedNetworkHasNoUndecidedFinding() {
+        assertThat(TestModels.findings("consistency/leak.xml", "balance.consistency-undecided")).isEmpty();
     }
 }
