@@ -74,7 +74,7 @@ public final class ModelLoader {
             SBMLDocument doc;
             RecordingEventReader recorder;
             try {
-                recorder = new RecordingEventReader(factory.createXMLEventReader(in), displayPath);
+                recorder = new RecordingEventReader(factory.createXMLStreamReader(in), displayPath);
                 doc = new SBMLReader().readSBML(recorder);
             } catch (XMLStreamException e) {
                 throw new AtomLedgerException(where(displayPath, e.getLocation()) + "malformed XML: " + clean(e), e);
@@ -180,7 +180,7 @@ public final class ModelLoader {
             chargeSource = FormulaSource.NONE;
         }
         return new SpeciesInfo(s.getId(), s.getName(), s.getCompartment(), s.getBoundaryCondition(),
-                s.isSetSBOTerm() ? s.getSBOTermID() : "", formula, formulaSource, charge, chargeSource,
+                raw == null ? "" : raw.sboTerm(), formula, formulaSource, charge, chargeSource,
                 raw == null ? List.of() : raw.inchis(), raw == null ? 0 : raw.line());
     }
 
@@ -191,7 +191,7 @@ public final class ModelLoader {
         for (ModifierSpeciesReference m : r.getListOfModifiers()) {
             modifiers.add(m.getSpecies());
         }
-        return new ReactionInfo(r.getId(), r.getName(), r.getReversible(), r.isSetSBOTerm() ? r.getSBOTermID() : "",
+        return new ReactionInfo(r.getId(), r.getName(), r.getReversible(), raw == null ? "" : raw.sboTerm(),
                 reactants, products, modifiers, raw == null ? 0 : raw.line());
     }
 
@@ -203,7 +203,7 @@ public final class ModelLoader {
             String text = r == null ? null : r.stoichiometry();
             if (text == null && level == 2) {
                 // Level 2: an absent stoichiometry means 1 (unless stoichiometryMath is used).
-                text = ref.isSetStoichiometryMath() ? null : "1";
+                text = r != null && r.stoichiometryMath() ? null : "1";
             }
             out.add(new Participant(ref.getSpecies(), text, r == null ? 0 : r.line()));
         }
