@@ -12,6 +12,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.regex.Pattern;
 
 /**
  * Decides a reaction's {@link ReactionClass}, from its SBO term when the term is specific and
@@ -42,6 +43,8 @@ public final class ReactionClassifier {
 
     /** Participants at which a reaction counts as a lumping (biomass-like) reaction. */
     public static final int LUMPING_PARTICIPANTS = 20;
+
+    private static final Pattern COMPARTMENT_SUFFIX = Pattern.compile("\\s*\\[[^\\]]*\\]\\s*$");
 
     private static final Map<String, ReactionClass> SBO = Map.ofEntries(
             Map.entry("SBO:0000627", ReactionClass.EXCHANGE),
@@ -155,7 +158,7 @@ public final class ReactionClassifier {
 
     private static String stripCompartmentName(SpeciesInfo s) {
         // Names such as "ATP [cytoplasm]" carry the compartment; compare without it.
-        return s.name().replaceAll("\\s*\\[[^\\]]*\\]\\s*$", "").strip();
+        return COMPARTMENT_SUFFIX.matcher(s.name()).replaceAll("").strip();
     }
 
     private static String stem(SpeciesInfo s) {

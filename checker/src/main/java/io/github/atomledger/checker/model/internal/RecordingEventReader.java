@@ -13,7 +13,6 @@ import java.util.Map;
 import java.util.NoSuchElementException;
 import java.util.Set;
 import java.util.TreeSet;
-import java.util.regex.Pattern;
 import javax.xml.stream.XMLEventFactory;
 import javax.xml.stream.XMLEventReader;
 import javax.xml.stream.XMLStreamConstants;
@@ -56,7 +55,6 @@ public final class RecordingEventReader implements XMLEventReader {
 
     public static final String FBC_PREFIX = "http://www.sbml.org/sbml/level3/version1/fbc/version";
     private static final String SBML_PREFIX = "http://www.sbml.org/sbml/level";
-    private static final Pattern SBO_TERM = Pattern.compile("SBO:\\d{7}");
 
     /** The SBML core elements JSBML is shown, with the attributes it is shown on each. */
     static final Map<String, Set<String>> KEPT = Map.ofEntries(
@@ -336,7 +334,15 @@ public final class RecordingEventReader implements XMLEventReader {
     /** The sboTerm attribute when it has the form JSBML accepts ({@code SBO:} and seven digits), else "". */
     private String sboTerm() {
         String text = in.getAttributeValue(null, "sboTerm");
-        return text != null && SBO_TERM.matcher(text).matches() ? text : "";
+        if (text == null || text.length() != 11 || !text.startsWith("SBO:")) {
+            return "";
+        }
+        for (int i = 4; i < 11; i++) {
+            if (text.charAt(i) < '0' || text.charAt(i) > '9') {
+                return "";
+            }
+        }
+        return text;
     }
 
     private String fbcAttr(String name) {
