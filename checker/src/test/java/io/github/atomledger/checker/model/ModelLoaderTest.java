@@ -153,6 +153,7 @@ class ModelLoaderTest {
         assertThat(hex.products()).extracting(Participant::species).containsExactly("M_g6p_c", "M_adp_c", "M_h_c");
         assertThat(m.reactions().get(1).sboTerm()).isEqualTo("SBO:0000627");
         assertThat(m.reactions().get(1).reversible()).isTrue();
+        assertThat(m.reactions().get(2).sboTerm()).as("eight digits").isEmpty();
         assertThat(m.duplicateIds()).as("withheld elements still count").containsExactly("G_g2");
     }
 
