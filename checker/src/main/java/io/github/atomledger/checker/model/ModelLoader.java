@@ -202,11 +202,16 @@ public final class ModelLoader {
     }
 
     private static ReactionInfo reaction(Reaction r, RawReaction raw, int level) {
-        List<Participant> reactants = participants(r.getListOfReactants(), raw == null ? null : raw.reactants(), level);
-        List<Participant> products = participants(r.getListOfProducts(), raw == null ? null : raw.products(), level);
+        // JSBML's getListOf...() creates and registers an empty list when there is none: ask first.
+        List<Participant> reactants = r.isSetListOfReactants()
+                ? participants(r.getListOfReactants(), raw == null ? null : raw.reactants(), level) : List.of();
+        List<Participant> products = r.isSetListOfProducts()
+                ? participants(r.getListOfProducts(), raw == null ? null : raw.products(), level) : List.of();
         List<String> modifiers = new ArrayList<>();
-        for (ModifierSpeciesReference m : r.getListOfModifiers()) {
-            modifiers.add(m.getSpecies());
+        if (r.isSetListOfModifiers()) {
+            for (ModifierSpeciesReference m : r.getListOfModifiers()) {
+                modifiers.add(m.getSpecies());
+            }
         }
         return new ReactionInfo(r.getId(), r.getName(), r.getReversible(), raw == null ? "" : raw.sboTerm(),
                 reactants, products, modifiers, raw == null ? 0 : raw.line());

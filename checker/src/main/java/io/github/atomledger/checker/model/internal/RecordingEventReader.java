@@ -13,6 +13,7 @@ import java.util.Map;
 import java.util.NoSuchElementException;
 import java.util.Set;
 import java.util.TreeSet;
+import javax.xml.stream.Location;
 import javax.xml.stream.XMLEventFactory;
 import javax.xml.stream.XMLEventReader;
 import javax.xml.stream.XMLStreamConstants;
@@ -46,6 +47,7 @@ import javax.xml.stream.events.XMLEvent;
  * parses an SBO term by loading the whole SBO ontology (about 0.1 s on first use), and no check
  * reads any of the rest through JSBML; the texts it needs are recorded here. Events are made only
  * for what JSBML sees: the withheld parts, most of a genome-scale file, are walked with the cursor.
+ * The events carry no location (JSBML 1.6.1 reads none; lines are recorded here).
  *
  * <p>Errors: a Woodstox {@link XMLStreamException} is rethrown by {@link #nextEvent()} and wrapped in
  * an {@link IllegalStateException} by {@link #hasNext()}; refusals are {@link AtomLedgerException}s
@@ -191,15 +193,16 @@ public final class RecordingEventReader implements XMLEventReader {
         in.next();
     }
 
+    /** The line of the current token (Woodstox makes a new location object per call: only where a line is kept). */
     private int line() {
-        return in.getLocation() == null ? 0 : Math.max(0, in.getLocation().getLineNumber());
+        Location location = in.getLocation();
+        return location == null ? 0 : Math.max(0, location.getLineNumber());
     }
 
     private void startElement() {
         String local = in.getLocalName();
-        int line = line();
         if (!rootSeen) {
-            root(local, line);
+            root(local, line());
             return;
         }
         if (opaque.inside()) {
@@ -212,7 +215,7 @@ public final class RecordingEventReader implements XMLEventReader {
             opaque.open(local, currentSpecies);
             return;
         }
-        record(local, line);
+        record(local);
         if (withheldDepth > 0 || !coreNamespace.equals(in.getNamespaceURI()) || !KEPT.containsKey(local)) {
             withheldDepth++;
             return;
@@ -258,7 +261,6 @@ public final class RecordingEventReader implements XMLEventReader {
                 attributes.add(events.createAttribute(name, in.getAttributeValue(i)));
             }
         }
-        events.setLocation(in.getLocation());
         String prefix = in.getPrefix();
         pending.add(events.createStartElement(prefix == null ? "" : prefix, coreNamespace, local,
                 attributes.iterator(), namespaces.iterator()));
@@ -273,7 +275,6 @@ public final class RecordingEventReader implements XMLEventReader {
             }
         } else {
             String prefix = in.getPrefix();
-            events.setLocation(in.getLocation());
             pending.add(events.createEndElement(prefix == null ? "" : prefix, coreNamespace, in.getLocalName()));
         }
         switch (in.getLocalName()) {
@@ -287,7 +288,7 @@ public final class RecordingEventReader implements XMLEventReader {
     }
 
     /** Records ids, texts and lines of an element outside notes and annotations. */
-    private void record(String local, int line) {
+    private void record(String local) {
         String id = in.getAttributeValue(null, "id");
         if (id == null) {
             id = fbcAttr("id");
@@ -299,11 +300,11 @@ public final class RecordingEventReader implements XMLEventReader {
         switch (local) {
             case "species" -> {
                 currentSpecies = new RawSpecies.Builder(id, fbcAttr("chemicalFormula"), fbcAttr("charge"),
-                        in.getAttributeValue(null, "charge"), sboTerm(), line);
+                        in.getAttributeValue(null, "charge"), sboTerm(), line());
                 species.putIfAbsent(id == null ? "" : id, currentSpecies);
             }
             case "reaction" -> {
-                currentReaction = new RawReaction(id == null ? "" : id, line, sboTerm());
+                currentReaction = new RawReaction(id == null ? "" : id, line(), sboTerm());
                 reactions.putIfAbsent(currentReaction.id(), currentReaction);
             }
             case "listOfReactants" -> currentList = currentReaction == null ? null : currentReaction.reactants();
@@ -312,7 +313,7 @@ public final class RecordingEventReader implements XMLEventReader {
             case "speciesReference" -> {
                 if (currentList != null) {
                     currentList.add(new RawReaction.Ref(nullToEmpty(in.getAttributeValue(null, "species")),
-                            in.getAttributeValue(null, "stoichiometry"), line, false));
+                            in.getAttributeValue(null, "stoichiometry"), line(), false));
                 }
             }
             case "stoichiometryMath" -> {
