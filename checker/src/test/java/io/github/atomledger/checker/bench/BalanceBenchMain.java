@@ -8,6 +8,7 @@ import io.github.atomledger.checker.engine.RunListener;
 import io.github.atomledger.checker.engine.RunResult;
 import io.github.atomledger.checker.model.LoadOptions;
 import io.github.atomledger.checker.model.ModelLoader;
+import io.github.atomledger.checker.model.OneThreadLoader;
 import io.github.atomledger.checker.report.JsonReporter;
 
 import com.ctc.wstx.stax.WstxInputFactory;
@@ -26,9 +27,11 @@ import org.sbml.jsbml.SBMLReader;
 
 /**
  * One benchmark step in its own JVM: {@code <mode> <model file> <repeats> <report dir>}. Prints one
- * line {@code ms <t1> <t2> ...} with the in-process time of each repeat. Modes: {@code stax} (a
+ * line {@code ms <t1> <t2> ...} with the in-process time of each repeat, {@code cpu ...} with the main thread's CPU
+ * time of each, and {@code processCpuMs} with the CPU time of the whole process (all threads) at the end. Modes: {@code stax} (a
  * bare hardened StAX pass, the floor), {@code jsbml} (JSBML's own reader, nothing else),
- * {@code load} (our ModelLoader), {@code balance} (load, every check but the consistency LP, the JSON
+ * {@code load} (our ModelLoader: tokenising and recording on a second thread beside JSBML), {@code load1} (the same
+ * on one thread), {@code balance} (load, every check but the consistency LP, the JSON
  * report), {@code engine} (load, every check, the JSON report).
  */
 public final class BalanceBenchMain {
@@ -56,6 +59,11 @@ public final class BalanceBenchMain {
         System.out.println(cpu);
         Runtime rt = Runtime.getRuntime();
         System.out.println("heapUsedMb " + (rt.totalMemory() - rt.freeMemory()) / (1 << 20));
+        // CPU of every thread of the process so far (JIT compilers and GC included), as user + system time would show.
+        java.lang.management.OperatingSystemMXBean os = java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+        if (os instanceof com.sun.management.OperatingSystemMXBean sun) {
+            System.out.println("processCpuMs " + sun.getProcessCpuTime() / 1_000_000);
+        }
         System.out.println("sink " + sink);
     }
 
@@ -84,6 +92,9 @@ public final class BalanceBenchMain {
             }
             case "load" -> {
                 return new ModelLoader(LoadOptions.defaults()).load(file, file.getFileName().toString()).reactions().size();
+            }
+            case "load1" -> {
+                return OneThreadLoader.load(file, file.getFileName().toString()).reactions().size();
             }
             case "engine", "balance" -> {
                 RunConfig config = RunConfig.defaults(file.getParent(), List.of(file.getFileName().toString()));
