@@ -20,6 +20,7 @@ public final class Rational implements Comparable<Rational> {
     public static final Rational ONE = new Rational(BigInteger.ONE, BigInteger.ONE);
 
     private static final long[] LONG_TEN_POWERS = tenPowers();
+    private static final BigInteger FIVE = BigInteger.valueOf(5);
 
     private final BigInteger numerator;
     private final BigInteger denominator;
@@ -281,12 +282,38 @@ public final class Rational implements Comparable<Rational> {
         if (isInteger()) {
             return numerator.toString();
         }
-        BigDecimal n = new BigDecimal(numerator);
-        try {
-            return n.divide(new BigDecimal(denominator)).stripTrailingZeros().toPlainString();
-        } catch (ArithmeticException nonTerminating) {
-            return n.divide(new BigDecimal(denominator), 6, java.math.RoundingMode.HALF_EVEN)
-                    .stripTrailingZeros().toPlainString();
+        if (isTerminatingDecimal()) {
+            // n / (2^a 5^b) = n 2^(k-a) 5^(k-b) / 10^k with k = max(a, b): no division needed.
+            int twos = denominator.getLowestSetBit();
+            int fives = 0;
+            for (BigInteger rest = denominator.shiftRight(twos); !rest.equals(BigInteger.ONE); rest = rest.divide(FIVE)) {
+                fives++;
+            }
+            int k = Math.max(twos, fives);
+            BigInteger unscaled = numerator.shiftLeft(k - twos).multiply(FIVE.pow(k - fives));
+            return new BigDecimal(unscaled, k).stripTrailingZeros().toPlainString();
+        }
+        return new BigDecimal(numerator).divide(new BigDecimal(denominator), 6, java.math.RoundingMode.HALF_EVEN)
+                .stripTrailingZeros().toPlainString();
+    }
+
+    /** True when the value has a finite decimal expansion (the denominator has no prime factor but 2 and 5). */
+    public boolean isTerminatingDecimal() {
+        if (denominator.bitLength() < 63) {
+            long d = denominator.longValue();
+            d >>= Long.numberOfTrailingZeros(d);
+            while (d % 5 == 0) {
+                d /= 5;
+            }
+            return d == 1;
+        }
+        BigInteger d = denominator.shiftRight(denominator.getLowestSetBit());
+        while (true) {
+            BigInteger[] qr = d.divideAndRemainder(FIVE);
+            if (qr[1].signum() != 0) {
+                return d.equals(BigInteger.ONE);
+            }
+            d = qr[0];
         }
     }
 

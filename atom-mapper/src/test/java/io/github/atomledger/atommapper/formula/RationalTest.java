@@ -115,4 +115,27 @@ class RationalTest {
         assertThat(Rational.of(Long.MAX_VALUE, -2).toString()).isEqualTo("-9223372036854775807/2");
         assertThat(Rational.of(Long.MAX_VALUE).add(Rational.ONE).toString()).isEqualTo("9223372036854775808");
     }
+
+    @Test
+    void decimalTextAgreesWithBigDecimalDivision() {
+        // Issue 8: the division-free rendering must print what BigDecimal's exact division prints.
+        Random random = new Random(5);
+        for (int i = 0; i < 5_000; i++) {
+            BigInteger n = BigInteger.valueOf(random.nextLong() >> random.nextInt(64));
+            BigInteger d = BigInteger.TWO.pow(random.nextInt(70)).multiply(BigInteger.valueOf(5).pow(random.nextInt(40)))
+                    .multiply(random.nextInt(4) == 0 ? BigInteger.valueOf(3 + 2 * random.nextInt(100)) : BigInteger.ONE);
+            Rational r = Rational.of(n, d);
+            BigDecimal exact;
+            try {
+                exact = new BigDecimal(r.numerator()).divide(new BigDecimal(r.denominator()));
+            } catch (ArithmeticException nonTerminating) {
+                assertThat(r.isTerminatingDecimal()).as(r.toString()).isFalse();
+                continue;
+            }
+            assertThat(r.isTerminatingDecimal()).as(r.toString()).isTrue();
+            assertThat(r.toDecimalString()).as(r.toString()).isEqualTo(exact.stripTrailingZeros().toPlainString());
+        }
+        assertThat(Rational.parse("-1/3").isTerminatingDecimal()).isFalse();
+        assertThat(Rational.parse("-1/3").toDecimalString()).isEqualTo("-0.333333");
+    }
 }
