@@ -139,19 +139,16 @@ public final class Rational implements Comparable<Rational> {
         }
         int exponent = 0;
         if (i < n && (s.charAt(i) == 'e' || s.charAt(i) == 'E')) {
-            i++;
-            boolean negativeExponent = false;
+            int expStart = ++i;
             if (i < n && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
-                negativeExponent = s.charAt(i) == '-';
                 i++;
             }
-            int expStart = i;
+            int digitsStart = i;
             i = skipDigits(s, i);
-            if (i == expStart || i - expStart > 3) {
+            if (i == digitsStart || i - digitsStart > 3) {
                 throw notDecimal(text);
             }
             exponent = Integer.parseInt(s, expStart, i, 10);
-            exponent = negativeExponent ? -exponent : exponent;
         }
         int digits = (intEnd - intStart) + (fracEnd - fracStart);
         if (i != n || (intEnd == intStart && fracEnd == fracStart)) {

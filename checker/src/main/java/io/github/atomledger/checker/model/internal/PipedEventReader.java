@@ -25,7 +25,7 @@ import javax.xml.stream.events.XMLEvent;
  *
  * <p>One thread reads this instance; the source is used only by the thread this starts.
  */
-public final class PipedEventReader implements XMLEventReader, AutoCloseable {
+public final class PipedEventReader implements EventSource, AutoCloseable {
 
     private static final int BATCH = 512;
     private static final int QUEUED_BATCHES = 16;
@@ -137,21 +137,6 @@ public final class PipedEventReader implements XMLEventReader, AutoCloseable {
     @Override
     public XMLEvent peek() {
         return hasNext() ? batch.get(index) : null;
-    }
-
-    @Override
-    public XMLEvent nextTag() {
-        XMLEvent e = nextEvent();
-        while (!e.isStartElement() && !e.isEndElement()) {
-            e = nextEvent();
-        }
-        return e;
-    }
-
-    /** Unsupported, as in {@link RecordingEventReader}. */
-    @Override
-    public String getElementText() {
-        throw new UnsupportedOperationException("getElementText");
     }
 
     @Override
