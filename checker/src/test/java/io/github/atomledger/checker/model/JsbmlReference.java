@@ -1,5 +1,7 @@
 package io.github.atomledger.checker.model;
 
+import io.github.atomledger.checker.model.internal.SafeXml;
+
 import java.io.BufferedInputStream;
 import java.io.InputStream;
 import java.nio.file.Files;
@@ -7,19 +9,23 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.zip.GZIPInputStream;
+import javax.xml.stream.EventFilter;
+import javax.xml.stream.XMLInputFactory;
+import javax.xml.stream.events.XMLEvent;
 import org.sbml.jsbml.Compartment;
 import org.sbml.jsbml.Model;
 import org.sbml.jsbml.ModifierSpeciesReference;
 import org.sbml.jsbml.Reaction;
 import org.sbml.jsbml.SBMLDocument;
-import org.sbml.jsbml.SBMLReader;
 import org.sbml.jsbml.Species;
 import org.sbml.jsbml.SpeciesReference;
 
 /**
- * The reference for what the loader withholds from JSBML: JSBML's own reader, shown the whole document
- * (notes, annotations, packages, SBO terms and all), and the same facts taken from a {@link ModelView},
- * one line per element, so that a difference shows as a readable diff.
+ * The reference for what the loader withholds from JSBML: JSBML's own reader, shown the whole document (notes,
+ * annotations, metaids, SBO terms, units, parameters, math and all) but for the elements of SBML packages, which
+ * jsbml-core, the only JSBML on the class path, cannot read (a gene product association ends in a
+ * ClassCastException); and the same facts taken from a {@link ModelView}, one line per element, so that a
+ * difference shows as a readable diff.
  */
 final class JsbmlReference {
 
@@ -31,7 +37,9 @@ final class JsbmlReference {
         SBMLDocument doc;
         try (InputStream raw = new BufferedInputStream(Files.newInputStream(file));
              InputStream in = file.toString().endsWith(".gz") ? new GZIPInputStream(raw) : raw) {
-            doc = new SBMLReader().readSBMLFromStream(in);
+            XMLInputFactory factory = SafeXml.factory();
+            doc = new org.sbml.jsbml.xml.stax.SBMLReader().readSBML(
+                    factory.createFilteredReader(factory.createXMLEventReader(in), new WithoutPackageElements()));
         }
         Model model = doc.getModel();
         List<String> out = new ArrayList<>();
@@ -72,6 +80,29 @@ final class JsbmlReference {
                     + participants(r.products(), view.level()) + " modifiers " + r.modifiers());
         }
         return out;
+    }
+
+    /** Drops every element, with its content, in an SBML package namespace ({@code .../level3/version1/fbc/...}). */
+    private static final class WithoutPackageElements implements EventFilter {
+        private int depth;
+
+        @Override
+        public boolean accept(XMLEvent event) {
+            if (event.isStartElement()) {
+                if (depth > 0 || isPackage(event.asStartElement().getName().getNamespaceURI())) {
+                    depth++;
+                    return false;
+                }
+            } else if (event.isEndElement() && depth > 0) {
+                depth--;
+                return false;
+            }
+            return depth == 0;
+        }
+
+        private static boolean isPackage(String uri) {
+            return uri.startsWith("http://www.sbml.org/sbml/level3/") && !uri.endsWith("/core");
+        }
     }
 
     private static String orId(String name, String id) {
