@@ -2,7 +2,6 @@ package io.github.atomledger.checker.model;
 
 import io.github.atomledger.checker.AtomLedgerException;
 import io.github.atomledger.checker.model.internal.CappedInputStream;
-import io.github.atomledger.checker.model.internal.PipedEventReader;
 import io.github.atomledger.checker.model.internal.RawReaction;
 import io.github.atomledger.checker.model.internal.RawSpecies;
 import io.github.atomledger.checker.model.internal.RecordingEventReader;
@@ -55,19 +54,9 @@ import org.sbml.jsbml.xml.stax.SBMLReader;
 public final class ModelLoader {
 
     private final LoadOptions options;
-    private final boolean piped;
 
     public ModelLoader(LoadOptions options) {
-        this(options, true);
-    }
-
-    /**
-     * @param piped true to decompress, tokenise and record on a second thread while JSBML builds the
-     *              document (the default); false to do all of it on the calling thread
-     */
-    ModelLoader(LoadOptions options, boolean piped) {
         this.options = options;
-        this.piped = piped;
     }
 
     /**
@@ -86,13 +75,7 @@ public final class ModelLoader {
             RecordingEventReader recorder;
             try {
                 recorder = new RecordingEventReader(factory.createXMLStreamReader(in), displayPath);
-                if (piped) {
-                    try (PipedEventReader events = new PipedEventReader(recorder, "atomledger-read-model")) {
-                        doc = new SBMLReader().readSBML(events);
-                    }
-                } else {
-                    doc = new SBMLReader().readSBML(recorder);
-                }
+                doc = new SBMLReader().readSBML(recorder);
             } catch (XMLStreamException e) {
                 throw new AtomLedgerException(where(displayPath, e.getLocation()) + "malformed XML: " + clean(e), e);
             } catch (AtomLedgerException e) {

@@ -8,7 +8,6 @@ import io.github.atomledger.checker.engine.RunListener;
 import io.github.atomledger.checker.engine.RunResult;
 import io.github.atomledger.checker.model.LoadOptions;
 import io.github.atomledger.checker.model.ModelLoader;
-import io.github.atomledger.checker.model.OneThreadLoader;
 import io.github.atomledger.checker.report.JsonReporter;
 
 import com.ctc.wstx.stax.WstxInputFactory;
@@ -27,12 +26,12 @@ import org.sbml.jsbml.SBMLReader;
 
 /**
  * One benchmark step in its own JVM: {@code <mode> <model file> <repeats> <report dir>}. Prints one
- * line {@code ms <t1> <t2> ...} with the in-process time of each repeat, {@code cpu ...} with the main thread's CPU
- * time of each, and {@code processCpuMs} with the CPU time of the whole process (all threads) at the end. Modes: {@code stax} (a
- * bare hardened StAX pass, the floor), {@code jsbml} (JSBML's own reader, nothing else),
- * {@code load} (our ModelLoader: tokenising and recording on a second thread beside JSBML), {@code load1} (the same
- * on one thread), {@code balance} (load, every check but the consistency LP, the JSON
- * report), {@code engine} (load, every check, the JSON report).
+ * line {@code ms <t1> <t2> ...} with the in-process time of each repeat, {@code cpu ...} with the main
+ * thread's CPU time of each, and {@code processCpuMs} with the CPU time of the whole process (all
+ * threads, JIT compilers and GC included) at the end. Modes: {@code stax} (a bare hardened StAX pass,
+ * the floor), {@code jsbml} (JSBML's own reader, nothing else), {@code load} (our ModelLoader),
+ * {@code balance} (load, every check but the consistency LP, the JSON report), {@code engine} (load,
+ * every check, the JSON report).
  */
 public final class BalanceBenchMain {
 
@@ -92,9 +91,6 @@ public final class BalanceBenchMain {
             }
             case "load" -> {
                 return new ModelLoader(LoadOptions.defaults()).load(file, file.getFileName().toString()).reactions().size();
-            }
-            case "load1" -> {
-                return OneThreadLoader.load(file, file.getFileName().toString()).reactions().size();
             }
             case "engine", "balance" -> {
                 RunConfig config = RunConfig.defaults(file.getParent(), List.of(file.getFileName().toString()));

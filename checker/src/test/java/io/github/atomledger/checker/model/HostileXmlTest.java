@@ -56,13 +56,6 @@ class HostileXmlTest {
                 new ModelLoader(new LoadOptions(cap)).load(file, display);
             }
         },
-        /** The loader with tokenising and JSBML on the calling thread (the default pipes them). */
-        MODEL_LOADER_ONE_THREAD {
-            @Override
-            void read(Path file, String display, long cap) {
-                new ModelLoader(new LoadOptions(cap), false).load(file, display);
-            }
-        },
         ANNOTATION_INDEX {
             @Override
             void read(Path file, String display, long cap) {

@@ -15,6 +15,7 @@ import java.util.Set;
 import java.util.TreeSet;
 import javax.xml.stream.Location;
 import javax.xml.stream.XMLEventFactory;
+import javax.xml.stream.XMLEventReader;
 import javax.xml.stream.XMLStreamConstants;
 import javax.xml.stream.XMLStreamException;
 import javax.xml.stream.XMLStreamReader;
@@ -52,7 +53,7 @@ import javax.xml.stream.events.XMLEvent;
  * an {@link IllegalStateException} by {@link #hasNext()}; refusals are {@link AtomLedgerException}s
  * naming file and line. Not thread-safe; one instance per read.
  */
-public final class RecordingEventReader implements EventSource {
+public final class RecordingEventReader implements XMLEventReader {
 
     public static final String FBC_PREFIX = "http://www.sbml.org/sbml/level3/version1/fbc/version";
     private static final String SBML_PREFIX = "http://www.sbml.org/sbml/level";
@@ -130,6 +131,21 @@ public final class RecordingEventReader implements EventSource {
     public XMLEvent peek() throws XMLStreamException {
         fill();
         return pending.peek();
+    }
+
+    @Override
+    public XMLEvent nextTag() throws XMLStreamException {
+        XMLEvent e = nextEvent();
+        while (!e.isStartElement() && !e.isEndElement()) {
+            e = nextEvent();
+        }
+        return e;
+    }
+
+    /** Unsupported: JSBML reads no element text, and the reader withholds every text-bearing element. */
+    @Override
+    public String getElementText() {
+        throw new UnsupportedOperationException("getElementText");
     }
 
     @Override
