@@ -9,9 +9,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.zip.GZIPInputStream;
-import javax.xml.stream.EventFilter;
 import javax.xml.stream.XMLInputFactory;
-import javax.xml.stream.events.XMLEvent;
 import org.sbml.jsbml.Compartment;
 import org.sbml.jsbml.Model;
 import org.sbml.jsbml.ModifierSpeciesReference;
@@ -80,29 +78,6 @@ final class JsbmlReference {
                     + participants(r.products(), view.level()) + " modifiers " + r.modifiers());
         }
         return out;
-    }
-
-    /** Drops every element, with its content, in an SBML package namespace ({@code .../level3/version1/fbc/...}). */
-    private static final class WithoutPackageElements implements EventFilter {
-        private int depth;
-
-        @Override
-        public boolean accept(XMLEvent event) {
-            if (event.isStartElement()) {
-                if (depth > 0 || isPackage(event.asStartElement().getName().getNamespaceURI())) {
-                    depth++;
-                    return false;
-                }
-            } else if (event.isEndElement() && depth > 0) {
-                depth--;
-                return false;
-            }
-            return depth == 0;
-        }
-
-        private static boolean isPackage(String uri) {
-            return uri.startsWith("http://www.sbml.org/sbml/level3/") && !uri.endsWith("/core");
-        }
     }
 
     private static String orId(String name, String id) {
