@@ -34,12 +34,14 @@ import org.sbml.jsbml.xml.stax.SBMLReader;
  * Reads an SBML Level 2 or 3 file ({@code .xml}, or gzip-compressed {@code .xml.gz}) into a
  * {@link ModelView}.
  *
- * <p>JSBML builds the document; one streaming pass in front of it (the same parse, no second
- * read) keeps what JSBML would lose or round: formula and charge texts exactly as written
- * (fbc versions 1 to 3, decimal charges included), stoichiometry texts, the line of every
- * species, reaction and speciesReference, and duplicate ids. The reader is hardened: DOCTYPE
- * declarations and entity references are refused, external entities are never resolved, and
- * gzip input is capped at {@link LoadOptions#maxDecompressedBytes()}.
+ * <p>JSBML builds the document the view's compartments, species, reactions and species references
+ * come from; one streaming pass in front of it (the same parse, no second read) shows JSBML only
+ * those elements and the attributes read from them, and keeps what JSBML would lose or round:
+ * formula and charge texts exactly as written (fbc versions 1 to 3, decimal charges included),
+ * stoichiometry texts, SBO terms, the line of every species, reaction and speciesReference, and
+ * duplicate ids (see {@code RecordingEventReader} for what JSBML never sees). The reader is
+ * hardened: DOCTYPE declarations and entity references are refused, external entities are never
+ * resolved, and gzip input is capped at {@link LoadOptions#maxDecompressedBytes()}.
  *
  * <p>Formula and charge precedence per species: the fbc attributes, then {@code FORMULA:} /
  * {@code CHARGE:} lines in the notes, then (charge only) the Level 2 {@code charge} attribute.
