@@ -87,9 +87,7 @@ public final class ReactionClassifier {
             return new StructuralClass(ReactionClass.PSEUDO, "no participants");
         }
         if (open != null) {
-            boolean outside = open.stream().anyMatch(p -> model.species(p.species())
-                    .map(s -> s.boundary() || isExtracellular(model, s.compartment())).orElse(false));
-            if (outside) {
+            if (anyOutside(model, open)) {
                 return new StructuralClass(ReactionClass.EXCHANGE, "one side empty, species at the boundary");
             }
             return r.reversible()
@@ -97,7 +95,9 @@ public final class ReactionClassifier {
                     : new StructuralClass(ReactionClass.DEMAND, "one side empty, irreversible, internal species");
         }
         Set<String> distinct = new HashSet<>();
-        r.participants().forEach(p -> distinct.add(p.species()));
+        for (Participant p : r.participants()) {
+            distinct.add(p.species());
+        }
         String text = (r.id() + " " + r.name()).toLowerCase(Locale.ROOT);
         if (distinct.size() >= LUMPING_PARTICIPANTS) {
             return new StructuralClass(ReactionClass.BIOMASS, distinct.size() + " participants (lumping reaction)");
@@ -112,7 +112,24 @@ public final class ReactionClassifier {
     }
 
     private static boolean allBoundary(ModelView model, List<Participant> side) {
-        return !side.isEmpty() && side.stream().allMatch(p -> model.species(p.species()).map(SpeciesInfo::boundary).orElse(false));
+        for (Participant p : side) {
+            Optional<SpeciesInfo> s = model.species(p.species());
+            if (s.isEmpty() || !s.get().boundary()) {
+                return false;
+            }
+        }
+        return !side.isEmpty();
+    }
+
+    /** A participant that is a boundary species or sits in an extracellular compartment. */
+    private static boolean anyOutside(ModelView model, List<Participant> side) {
+        for (Participant p : side) {
+            Optional<SpeciesInfo> s = model.species(p.species());
+            if (s.isPresent() && (s.get().boundary() || isExtracellular(model, s.get().compartment()))) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Compartment ids and names commonly used for the extracellular space (common practice). */
