@@ -19,6 +19,9 @@ public final class Rational implements Comparable<Rational> {
     public static final Rational ZERO = new Rational(BigInteger.ZERO, BigInteger.ONE);
     public static final Rational ONE = new Rational(BigInteger.ONE, BigInteger.ONE);
 
+    private static final long[] LONG_TEN_POWERS = tenPowers();
+    private static final BigInteger FIVE = BigInteger.valueOf(5);
+
     private final BigInteger numerator;
     private final BigInteger denominator;
 
@@ -33,6 +36,9 @@ public final class Rational implements Comparable<Rational> {
         Objects.requireNonNull(denominator, "denominator");
         if (denominator.signum() == 0) {
             throw new ArithmeticException("denominator is zero");
+        }
+        if (numerator.bitLength() < 63 && denominator.bitLength() < 63) {
+            return ofSmall(numerator.longValue(), denominator.longValue());
         }
         if (denominator.signum() < 0) {
             numerator = numerator.negate();
@@ -50,11 +56,39 @@ public final class Rational implements Comparable<Rational> {
     }
 
     public static Rational of(long numerator, long denominator) {
-        return of(BigInteger.valueOf(numerator), BigInteger.valueOf(denominator));
+        if (denominator == 0) {
+            throw new ArithmeticException("denominator is zero");
+        }
+        if (numerator == Long.MIN_VALUE || denominator == Long.MIN_VALUE) {
+            return of(BigInteger.valueOf(numerator), BigInteger.valueOf(denominator));
+        }
+        return ofSmall(numerator, denominator);
+    }
+
+    /**
+     * Lowest terms in {@code long} arithmetic (most coefficients, counts and charges are small, and
+     * BigInteger's gcd is slow on them); both magnitudes below 2^63, the denominator not zero.
+     */
+    private static Rational ofSmall(long numerator, long denominator) {
+        if (numerator == 0) {
+            return ZERO;
+        }
+        if (denominator < 0) {
+            numerator = -numerator;
+            denominator = -denominator;
+        }
+        long a = Math.abs(numerator);
+        long b = denominator;
+        while (b != 0) {
+            long t = a % b;
+            a = b;
+            b = t;
+        }
+        return new Rational(BigInteger.valueOf(numerator / a), BigInteger.valueOf(denominator / a));
     }
 
     public static Rational of(long value) {
-        return of(BigInteger.valueOf(value), BigInteger.ONE);
+        return value == 0 ? ZERO : new Rational(BigInteger.valueOf(value), BigInteger.ONE);
     }
 
     /**
@@ -77,10 +111,88 @@ public final class Rational implements Comparable<Rational> {
             }
             return of(new BigInteger(s.substring(0, slash)), d);
         }
-        if (s.isEmpty() || !s.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d{1,3})?")) {
-            throw new NumberFormatException("not a finite decimal number: '" + text + "'");
+        return parseDecimal(s, text);
+    }
+
+    /**
+     * The grammar {@code [+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d{1,3})?} scanned by hand (a regex
+     * compiled per call was half of the balance checks' cold time), the digits taken as a {@code long}
+     * when there are at most 18 of them.
+     */
+    private static Rational parseDecimal(String s, String text) {
+        int n = s.length();
+        int i = 0;
+        boolean negative = false;
+        if (i < n && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
+            negative = s.charAt(i) == '-';
+            i++;
+        }
+        int intStart = i;
+        i = skipDigits(s, i);
+        int intEnd = i;
+        int fracStart = i;
+        int fracEnd = i;
+        if (i < n && s.charAt(i) == '.') {
+            fracStart = i + 1;
+            i = skipDigits(s, fracStart);
+            fracEnd = i;
+        }
+        int exponent = 0;
+        if (i < n && (s.charAt(i) == 'e' || s.charAt(i) == 'E')) {
+            int expStart = ++i;
+            if (i < n && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
+                i++;
+            }
+            int digitsStart = i;
+            i = skipDigits(s, i);
+            if (i == digitsStart || i - digitsStart > 3) {
+                throw notDecimal(text);
+            }
+            exponent = Integer.parseInt(s, expStart, i, 10);
+        }
+        int digits = (intEnd - intStart) + (fracEnd - fracStart);
+        if (i != n || (intEnd == intStart && fracEnd == fracStart)) {
+            throw notDecimal(text);
+        }
+        int scale = (fracEnd - fracStart) - exponent;
+        if (digits <= 18 && scale >= -18 && scale <= 18) {
+            long unscaled = 0;
+            for (int k = intStart; k < fracEnd; k++) {
+                if (k != intEnd || fracStart == intEnd) {
+                    unscaled = unscaled * 10 + (s.charAt(k) - '0');
+                }
+            }
+            unscaled = negative ? -unscaled : unscaled;
+            if (scale <= 0) {
+                long factor = LONG_TEN_POWERS[-scale];
+                if (unscaled == 0 || Math.abs(unscaled) <= Long.MAX_VALUE / factor) {
+                    return of(unscaled * factor);
+                }
+            } else {
+                return ofSmall(unscaled, LONG_TEN_POWERS[scale]);
+            }
         }
         return of(new BigDecimal(s));
+    }
+
+    private static long[] tenPowers() {
+        long[] p = new long[19];
+        p[0] = 1;
+        for (int k = 1; k < p.length; k++) {
+            p[k] = p[k - 1] * 10;
+        }
+        return p;
+    }
+
+    private static int skipDigits(String s, int i) {
+        while (i < s.length() && s.charAt(i) >= '0' && s.charAt(i) <= '9') {
+            i++;
+        }
+        return i;
+    }
+
+    private static NumberFormatException notDecimal(String text) {
+        return new NumberFormatException("not a finite decimal number: '" + text + "'");
     }
 
     /** Converts a {@link BigDecimal} exactly (no rounding). */
@@ -120,8 +232,16 @@ public final class Rational implements Comparable<Rational> {
         if (isZero()) {
             return other;
         }
+        if (denominator.equals(other.denominator)) {
+            BigInteger sum = numerator.add(other.numerator);
+            return isInteger() ? integer(sum) : of(sum, denominator);
+        }
         return of(numerator.multiply(other.denominator).add(other.numerator.multiply(denominator)),
                 denominator.multiply(other.denominator));
+    }
+
+    private static Rational integer(BigInteger value) {
+        return value.signum() == 0 ? ZERO : new Rational(value, BigInteger.ONE);
     }
 
     public Rational subtract(Rational other) {
@@ -129,10 +249,16 @@ public final class Rational implements Comparable<Rational> {
     }
 
     public Rational multiply(Rational other) {
+        if (isInteger() && other.isInteger()) {
+            return integer(numerator.multiply(other.numerator));
+        }
         return of(numerator.multiply(other.numerator), denominator.multiply(other.denominator));
     }
 
     public Rational multiply(long factor) {
+        if (isInteger()) {
+            return integer(numerator.multiply(BigInteger.valueOf(factor)));
+        }
         return of(numerator.multiply(BigInteger.valueOf(factor)), denominator);
     }
 
@@ -153,12 +279,38 @@ public final class Rational implements Comparable<Rational> {
         if (isInteger()) {
             return numerator.toString();
         }
-        BigDecimal n = new BigDecimal(numerator);
-        try {
-            return n.divide(new BigDecimal(denominator)).stripTrailingZeros().toPlainString();
-        } catch (ArithmeticException nonTerminating) {
-            return n.divide(new BigDecimal(denominator), 6, java.math.RoundingMode.HALF_EVEN)
-                    .stripTrailingZeros().toPlainString();
+        if (isTerminatingDecimal()) {
+            // n / (2^a 5^b) = n 2^(k-a) 5^(k-b) / 10^k with k = max(a, b): no division needed.
+            int twos = denominator.getLowestSetBit();
+            int fives = 0;
+            for (BigInteger rest = denominator.shiftRight(twos); !rest.equals(BigInteger.ONE); rest = rest.divide(FIVE)) {
+                fives++;
+            }
+            int k = Math.max(twos, fives);
+            BigInteger unscaled = numerator.shiftLeft(k - twos).multiply(FIVE.pow(k - fives));
+            return new BigDecimal(unscaled, k).stripTrailingZeros().toPlainString();
+        }
+        return new BigDecimal(numerator).divide(new BigDecimal(denominator), 6, java.math.RoundingMode.HALF_EVEN)
+                .stripTrailingZeros().toPlainString();
+    }
+
+    /** True when the value has a finite decimal expansion (the denominator has no prime factor but 2 and 5). */
+    public boolean isTerminatingDecimal() {
+        if (denominator.bitLength() < 63) {
+            long d = denominator.longValue();
+            d >>= Long.numberOfTrailingZeros(d);
+            while (d % 5 == 0) {
+                d /= 5;
+            }
+            return d == 1;
+        }
+        BigInteger d = denominator.shiftRight(denominator.getLowestSetBit());
+        while (true) {
+            BigInteger[] qr = d.divideAndRemainder(FIVE);
+            if (qr[1].signum() != 0) {
+                return d.equals(BigInteger.ONE);
+            }
+            d = qr[0];
         }
     }
 

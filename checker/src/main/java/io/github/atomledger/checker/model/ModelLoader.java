@@ -34,12 +34,14 @@ import org.sbml.jsbml.xml.stax.SBMLReader;
  * Reads an SBML Level 2 or 3 file ({@code .xml}, or gzip-compressed {@code .xml.gz}) into a
  * {@link ModelView}.
  *
- * <p>JSBML builds the document; one streaming pass in front of it (the same parse, no second
- * read) keeps what JSBML would lose or round: formula and charge texts exactly as written
- * (fbc versions 1 to 3, decimal charges included), stoichiometry texts, the line of every
- * species, reaction and speciesReference, and duplicate ids. The reader is hardened: DOCTYPE
- * declarations and entity references are refused, external entities are never resolved, and
- * gzip input is capped at {@link LoadOptions#maxDecompressedBytes()}.
+ * <p>JSBML builds the document the view's compartments, species, reactions and species references
+ * come from; one streaming pass in front of it (the same parse, no second read) shows JSBML only
+ * those elements and the attributes read from them, and keeps what JSBML would lose or round:
+ * formula and charge texts exactly as written (fbc versions 1 to 3, decimal charges included),
+ * stoichiometry texts, SBO terms, the line of every species, reaction and speciesReference, and
+ * duplicate ids (see {@code RecordingEventReader} for what JSBML never sees). The reader is
+ * hardened: DOCTYPE declarations and entity references are refused, external entities are never
+ * resolved, and gzip input is capped at {@link LoadOptions#maxDecompressedBytes()}.
  *
  * <p>Formula and charge precedence per species: the fbc attributes, then {@code FORMULA:} /
  * {@code CHARGE:} lines in the notes, then (charge only) the Level 2 {@code charge} attribute.
@@ -74,7 +76,7 @@ public final class ModelLoader {
             SBMLDocument doc;
             RecordingEventReader recorder;
             try {
-                recorder = new RecordingEventReader(factory.createXMLEventReader(in), displayPath);
+                recorder = new RecordingEventReader(factory.createXMLStreamReader(in), displayPath);
                 doc = new SBMLReader().readSBML(recorder);
             } catch (XMLStreamException e) {
                 throw new AtomLedgerException(where(displayPath, e.getLocation()) + "malformed XML: " + clean(e), e);
@@ -180,18 +182,23 @@ public final class ModelLoader {
             chargeSource = FormulaSource.NONE;
         }
         return new SpeciesInfo(s.getId(), s.getName(), s.getCompartment(), s.getBoundaryCondition(),
-                s.isSetSBOTerm() ? s.getSBOTermID() : "", formula, formulaSource, charge, chargeSource,
+                raw == null ? "" : raw.sboTerm(), formula, formulaSource, charge, chargeSource,
                 raw == null ? List.of() : raw.inchis(), raw == null ? 0 : raw.line());
     }
 
     private static ReactionInfo reaction(Reaction r, RawReaction raw, int level) {
-        List<Participant> reactants = participants(r.getListOfReactants(), raw == null ? null : raw.reactants(), level);
-        List<Participant> products = participants(r.getListOfProducts(), raw == null ? null : raw.products(), level);
+        // JSBML's getListOf...() creates and registers an empty list when there is none: ask first.
+        List<Participant> reactants = r.isSetListOfReactants()
+                ? participants(r.getListOfReactants(), raw == null ? null : raw.reactants(), level) : List.of();
+        List<Participant> products = r.isSetListOfProducts()
+                ? participants(r.getListOfProducts(), raw == null ? null : raw.products(), level) : List.of();
         List<String> modifiers = new ArrayList<>();
-        for (ModifierSpeciesReference m : r.getListOfModifiers()) {
-            modifiers.add(m.getSpecies());
+        if (r.isSetListOfModifiers()) {
+            for (ModifierSpeciesReference m : r.getListOfModifiers()) {
+                modifiers.add(m.getSpecies());
+            }
         }
-        return new ReactionInfo(r.getId(), r.getName(), r.getReversible(), r.isSetSBOTerm() ? r.getSBOTermID() : "",
+        return new ReactionInfo(r.getId(), r.getName(), r.getReversible(), raw == null ? "" : raw.sboTerm(),
                 reactants, products, modifiers, raw == null ? 0 : raw.line());
     }
 
@@ -203,7 +210,7 @@ public final class ModelLoader {
             String text = r == null ? null : r.stoichiometry();
             if (text == null && level == 2) {
                 // Level 2: an absent stoichiometry means 1 (unless stoichiometryMath is used).
-                text = ref.isSetStoichiometryMath() ? null : "1";
+                text = r != null && r.stoichiometryMath() ? null : "1";
             }
             out.add(new Participant(ref.getSpecies(), text, r == null ? 0 : r.line()));
         }

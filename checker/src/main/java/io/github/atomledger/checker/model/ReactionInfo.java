@@ -33,8 +33,11 @@ public record ReactionInfo(String id, String name, boolean reversible, String sb
         return reactants.isEmpty() || products.isEmpty();
     }
 
-    /** Reactants and products, reactants first. */
+    /** Reactants and products, reactants first; unmodifiable. */
     public List<Participant> participants() {
-        return java.util.stream.Stream.concat(reactants.stream(), products.stream()).toList();
+        List<Participant> all = new java.util.ArrayList<>(reactants.size() + products.size());
+        all.addAll(reactants);
+        all.addAll(products);
+        return java.util.Collections.unmodifiableList(all);
     }
 }

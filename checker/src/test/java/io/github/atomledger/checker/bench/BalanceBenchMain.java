@@ -8,6 +8,8 @@ import io.github.atomledger.checker.engine.RunListener;
 import io.github.atomledger.checker.engine.RunResult;
 import io.github.atomledger.checker.model.LoadOptions;
 import io.github.atomledger.checker.model.ModelLoader;
+import io.github.atomledger.checker.model.WithoutPackageElements;
+import io.github.atomledger.checker.model.internal.SafeXml;
 import io.github.atomledger.checker.report.JsonReporter;
 
 import com.ctc.wstx.stax.WstxInputFactory;
@@ -22,14 +24,16 @@ import javax.xml.stream.XMLInputFactory;
 import javax.xml.stream.XMLStreamConstants;
 import javax.xml.stream.XMLStreamReader;
 import org.sbml.jsbml.SBMLDocument;
-import org.sbml.jsbml.SBMLReader;
 
 /**
  * One benchmark step in its own JVM: {@code <mode> <model file> <repeats> <report dir>}. Prints one
- * line {@code ms <t1> <t2> ...} with the in-process time of each repeat. Modes: {@code stax} (a
- * bare hardened StAX pass, the floor), {@code jsbml} (JSBML's own reader, nothing else),
- * {@code load} (our ModelLoader), {@code balance} (load, every check but the consistency LP, the JSON
- * report), {@code engine} (load, every check, the JSON report).
+ * line {@code ms <t1> <t2> ...} with the in-process time of each repeat, {@code cpu ...} with the main
+ * thread's CPU time of each, and {@code processCpuMs} with the CPU time of the whole process (all
+ * threads, JIT compilers and GC included) at the end. Modes: {@code stax} (a bare hardened StAX pass,
+ * the floor), {@code jsbml} (JSBML's own reader, nothing else, shown the whole document but for SBML
+ * package elements, which jsbml-core cannot read), {@code load} (our ModelLoader),
+ * {@code balance} (load, every check but the consistency LP, the JSON report), {@code engine} (load,
+ * every check, the JSON report).
  */
 public final class BalanceBenchMain {
 
@@ -56,6 +60,11 @@ public final class BalanceBenchMain {
         System.out.println(cpu);
         Runtime rt = Runtime.getRuntime();
         System.out.println("heapUsedMb " + (rt.totalMemory() - rt.freeMemory()) / (1 << 20));
+        // CPU of every thread of the process so far (JIT compilers and GC included), as user + system time would show.
+        java.lang.management.OperatingSystemMXBean os = java.lang.management.ManagementFactory.getOperatingSystemMXBean();
+        if (os instanceof com.sun.management.OperatingSystemMXBean sun) {
+            System.out.println("processCpuMs " + sun.getProcessCpuTime() / 1_000_000);
+        }
         System.out.println("sink " + sink);
     }
 
@@ -78,7 +87,9 @@ public final class BalanceBenchMain {
             }
             case "jsbml" -> {
                 try (InputStream in = open(file)) {
-                    SBMLDocument doc = new SBMLReader().readSBMLFromStream(in);
+                    XMLInputFactory f = SafeXml.factory();
+                    SBMLDocument doc = new org.sbml.jsbml.xml.stax.SBMLReader().readSBML(
+                            f.createFilteredReader(f.createXMLEventReader(in), new WithoutPackageElements()));
                     return doc.getModel().getReactionCount();
                 }
             }

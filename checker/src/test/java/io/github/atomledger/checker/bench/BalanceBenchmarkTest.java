@@ -31,7 +31,7 @@ class BalanceBenchmarkTest {
     private static final int COLD_RUNS = 5;
     private static final int WARM_RUNS = 8;
 
-    record Run(double processMs, double[] inProcessMs, double[] cpuMs, long heapMb) {
+    record Run(double processMs, double[] inProcessMs, double[] cpuMs, long heapMb, double processCpuMs) {
     }
 
     static Run fork(String mode, Path model, int repeats, String xmx, Path reports) throws IOException, InterruptedException {
@@ -43,6 +43,7 @@ class BalanceBenchmarkTest {
         double[] ms = null;
         double[] cpu = null;
         long heap = 0;
+        double processCpu = 0;
         StringBuilder all = new StringBuilder();
         try (BufferedReader in = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
             for (String line; (line = in.readLine()) != null; ) {
@@ -53,13 +54,15 @@ class BalanceBenchmarkTest {
                     cpu = numbers(line);
                 } else if (line.startsWith("heapUsedMb ")) {
                     heap = Long.parseLong(line.substring(11).strip());
+                } else if (line.startsWith("processCpuMs ")) {
+                    processCpu = Double.parseDouble(line.substring(13).strip());
                 }
             }
         }
         int rc = p.waitFor();
         double wall = (System.nanoTime() - t0) / 1e6;
         assertThat(rc).as(all.toString()).isZero();
-        return new Run(wall, ms, cpu, heap);
+        return new Run(wall, ms, cpu, heap, processCpu);
     }
 
     private static double[] numbers(String line) {
@@ -78,18 +81,22 @@ class BalanceBenchmarkTest {
         Path out = Path.of("target", "bench");
         Files.createDirectories(out);
         StringBuilder md = new StringBuilder();
-        md.append("| step | cold process wall (median of ").append(COLD_RUNS).append(") | cold in-process | warm in-process (median of last ")
-                .append(WARM_RUNS / 2).append(") | warm CPU | ratio cold / floor | ratio warm / floor |\n|---|---|---|---|---|---|---|\n");
+        md.append("| step | cold process wall (median of ").append(COLD_RUNS).append(") | cold process CPU, all threads | cold in-process"
+                + " | warm in-process (median of last ").append(WARM_RUNS / 2)
+                .append(") | warm CPU | ratio cold / floor | ratio cold CPU / floor | ratio warm / floor |\n|---|---|---|---|---|---|---|---|---|\n");
         double floorCold = 0;
+        double floorCpu = 0;
         double floorWarm = 0;
         for (String mode : List.of("stax", "jsbml", "load", "balance", "engine")) {
             int cold = mode.equals("engine") ? 1 : COLD_RUNS;
             double[] wall = new double[cold];
             double[] inProc = new double[cold];
+            double[] cpu = new double[cold];
             for (int i = 0; i < cold; i++) {
                 Run r = fork(mode, yeast, 1, "2g", out.resolve("reports-" + mode));
                 wall[i] = r.processMs();
                 inProc[i] = r.inProcessMs()[0];
+                cpu[i] = r.processCpuMs();
             }
             int warmRuns = mode.equals("engine") ? 2 : WARM_RUNS;
             Run warm = fork(mode, yeast, warmRuns, "2g", out.resolve("reports-" + mode));
@@ -97,12 +104,15 @@ class BalanceBenchmarkTest {
             double[] lastCpu = Arrays.copyOfRange(warm.cpuMs(), warmRuns / 2, warmRuns);
             double coldMedian = median(wall);
             double warmMedian = median(lastHalf);
+            double cpuMedian = median(cpu);
             if (mode.equals("stax")) {
                 floorCold = coldMedian;
+                floorCpu = cpuMedian;
                 floorWarm = warmMedian;
             }
-            md.append(String.format(Locale.ROOT, "| %s | %.0f ms | %.0f ms | %.0f ms | %.0f ms | %.2f | %.2f |%n", mode, coldMedian,
-                    median(inProc), warmMedian, median(lastCpu), coldMedian / floorCold, warmMedian / floorWarm));
+            md.append(String.format(Locale.ROOT, "| %s | %.0f ms | %.0f ms | %.0f ms | %.0f ms | %.0f ms | %.2f | %.2f | %.2f |%n", mode,
+                    coldMedian, cpuMedian, median(inProc), warmMedian, median(lastCpu), coldMedian / floorCold, cpuMedian / floorCpu,
+                    warmMedian / floorWarm));
         }
         Path synthetic = out.resolve("synthetic-15000.xml");
         SyntheticModel.write(synthetic, 15_000);

@@ -15,10 +15,16 @@ import java.util.List;
 import java.util.Map;
 import java.util.zip.GZIPOutputStream;
 import java.util.stream.Collectors;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
 
-/** ModelLoader: formulas, charges and stoichiometry texts exactly as written, lines, gzip, errors (issue 8). */
+/**
+ * ModelLoader: formulas, charges and stoichiometry texts exactly as written, lines, gzip, errors, and what
+ * JSBML is not shown still reaching the view (issue 8).
+ */
 class ModelLoaderTest {
 
     @TempDir
@@ -124,5 +130,78 @@ class ModelLoaderTest {
         Files.writeString(bad, "<html><body/></html>\n");
         assertThatThrownBy(() -> new ModelLoader(LoadOptions.defaults()).load(bad, "html.xml"))
                 .isInstanceOf(AtomLedgerException.class).hasMessageContaining("html.xml:1: not an SBML file");
+    }
+
+    @Test
+    void contentWithheldFromJsbmlStillReachesTheView() {
+        ModelView m = TestModels.load("model/withheld-content.xml");
+        assertThat(m.modelId()).isEqualTo("withheld");
+        assertThat(m.compartment("e").orElseThrow().name()).isEqualTo("extracellular space");
+        SpeciesInfo glc = m.species("M_glc__D_c").orElseThrow();
+        assertThat(glc.sboTerm()).isEqualTo("SBO:0000247");
+        assertThat(glc.name()).isEqualTo("D-glucose");
+        assertThat(glc.formulaText()).isEqualTo("C6H12O6");
+        assertThat(glc.chargeText()).isEqualTo("0");
+        assertThat(glc.inchis()).as("'+' is not a space, '%3F' is '?'")
+                .containsExactly("InChI=1S/C6H12O6/c7-1-2-3(8)4(9)5(10)6(11)12-2/h2-11H,1H2/t2-,3-,4+,5-,6?/m1/s1");
+        assertThat(m.species("M_g6p_c").orElseThrow().sboTerm()).as("JSBML refuses 'SBO:176' too").isEmpty();
+        assertThat(m.species("M_glc__D_e").orElseThrow().boundary()).isTrue();
+        ReactionInfo hex = m.reactions().get(0);
+        assertThat(hex.sboTerm()).isEqualTo("SBO:0000176");
+        assertThat(hex.reversible()).isFalse();
+        assertThat(hex.modifiers()).containsExactly("M_atp_c");
+        assertThat(hex.products()).extracting(Participant::species).containsExactly("M_g6p_c", "M_adp_c", "M_h_c");
+        assertThat(m.reactions().get(1).sboTerm()).isEqualTo("SBO:0000627");
+        assertThat(m.reactions().get(1).reversible()).isTrue();
+        assertThat(m.reactions().get(2).sboTerm()).as("eight digits").isEmpty();
+        assertThat(m.duplicateIds()).as("withheld elements still count").containsExactly("G_g2");
+    }
+
+    @Test
+    void reactionKeepsItsIdWhenOnlyAWithheldElementRepeatsIt() throws IOException {
+        // JSBML, shown the parameter, would refuse the reaction's id as taken and leave it blank.
+        Path file = tmp.resolve("dup.xml");
+        Files.writeString(file, "<sbml xmlns=\"http://www.sbml.org/sbml/level3/version1/core\" level=\"3\" version=\"1\">"
+                + "<model id=\"m\"><listOfParameters><parameter id=\"R_1\" value=\"1\" constant=\"true\"/></listOfParameters>"
+                + "<listOfReactions><reaction id=\"R_1\" reversible=\"false\"/></listOfReactions></model></sbml>\n");
+        ModelView m = new ModelLoader(LoadOptions.defaults()).load(file, "dup.xml");
+        assertThat(m.reactions()).extracting(ReactionInfo::id).containsExactly("R_1");
+        assertThat(m.duplicateIds()).containsExactly("R_1");
+    }
+
+    @Test
+    void level2StoichiometryMathLeavesTheCoefficientUnset() {
+        ModelView m = TestModels.load("model/level2-stoichiometry-math.xml");
+        ReactionInfo x = m.reactions().get(0);
+        assertThat(x.reactants().get(0).stoichiometryText()).isEqualTo("1");
+        assertThat(x.products().get(0).stoichiometryText()).isNull();
+        assertThat(x.sboTerm()).isEqualTo("SBO:0000176");
+    }
+
+    static Stream<String> fixtures() {
+        return Stream.of("model/level2-notes.xml", "model/fbc3-decimal.xml", "model/withheld-content.xml",
+                "model/level2-stoichiometry-math.xml", "integrity/data-problems.xml", "balance/classes.xml",
+                "balance/generic-formula.xml", "mapping/fba-curated.xml", "consistency/leak.xml");
+    }
+
+    /** Everything the view takes from JSBML equals what JSBML reads when it is shown the whole document. */
+    @ParameterizedTest
+    @MethodSource("fixtures")
+    void viewAgreesWithJsbmlReadingTheWholeFixture(String fixture) throws Exception {
+        Path file = TestModels.fixture(fixture);
+        assertThat(JsbmlReference.describe(new ModelLoader(LoadOptions.defaults()).load(file, fixture)))
+                .isEqualTo(JsbmlReference.describe(file));
+    }
+
+    @ParameterizedTest
+    @MethodSource("sharedModels")
+    void viewAgreesWithJsbmlReadingTheWholeSharedModel(String name) throws Exception {
+        Path file = io.github.atomledger.checker.SharedData.require(name);
+        assertThat(JsbmlReference.describe(new ModelLoader(LoadOptions.defaults()).load(file, name)))
+                .isEqualTo(JsbmlReference.describe(file));
+    }
+
+    static Stream<String> sharedModels() {
+        return Stream.of("e_coli_core.xml", "yeast-GEM.xml.gz");
     }
 }

@@ -29,20 +29,7 @@ public final class Deltas {
      * otherwise the exact fraction ({@code "+1/3"}). Data fields keep {@link Rational#toString()}.
      */
     public static String signed(Rational r) {
-        String text = terminates(r) ? r.toDecimalString() : r.toString();
+        String text = r.isTerminatingDecimal() ? r.toDecimalString() : r.toString();
         return r.signum() > 0 ? "+" + text : text;
-    }
-
-    private static boolean terminates(Rational r) {
-        java.math.BigInteger d = r.denominator();
-        java.math.BigInteger two = java.math.BigInteger.TWO;
-        java.math.BigInteger five = java.math.BigInteger.valueOf(5);
-        while (d.mod(two).signum() == 0) {
-            d = d.divide(two);
-        }
-        while (d.mod(five).signum() == 0) {
-            d = d.divide(five);
-        }
-        return d.equals(java.math.BigInteger.ONE);
     }
 }

@@ -12,6 +12,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.regex.Pattern;
 
 /**
  * Decides a reaction's {@link ReactionClass}, from its SBO term when the term is specific and
@@ -42,6 +43,8 @@ public final class ReactionClassifier {
 
     /** Participants at which a reaction counts as a lumping (biomass-like) reaction. */
     public static final int LUMPING_PARTICIPANTS = 20;
+
+    private static final Pattern COMPARTMENT_SUFFIX = Pattern.compile("\\s*\\[[^\\]]*\\]\\s*$");
 
     private static final Map<String, ReactionClass> SBO = Map.ofEntries(
             Map.entry("SBO:0000627", ReactionClass.EXCHANGE),
@@ -84,9 +87,7 @@ public final class ReactionClassifier {
             return new StructuralClass(ReactionClass.PSEUDO, "no participants");
         }
         if (open != null) {
-            boolean outside = open.stream().anyMatch(p -> model.species(p.species())
-                    .map(s -> s.boundary() || isExtracellular(model, s.compartment())).orElse(false));
-            if (outside) {
+            if (anyOutside(model, open)) {
                 return new StructuralClass(ReactionClass.EXCHANGE, "one side empty, species at the boundary");
             }
             return r.reversible()
@@ -94,7 +95,9 @@ public final class ReactionClassifier {
                     : new StructuralClass(ReactionClass.DEMAND, "one side empty, irreversible, internal species");
         }
         Set<String> distinct = new HashSet<>();
-        r.participants().forEach(p -> distinct.add(p.species()));
+        for (Participant p : r.participants()) {
+            distinct.add(p.species());
+        }
         String text = (r.id() + " " + r.name()).toLowerCase(Locale.ROOT);
         if (distinct.size() >= LUMPING_PARTICIPANTS) {
             return new StructuralClass(ReactionClass.BIOMASS, distinct.size() + " participants (lumping reaction)");
@@ -109,7 +112,24 @@ public final class ReactionClassifier {
     }
 
     private static boolean allBoundary(ModelView model, List<Participant> side) {
-        return !side.isEmpty() && side.stream().allMatch(p -> model.species(p.species()).map(SpeciesInfo::boundary).orElse(false));
+        for (Participant p : side) {
+            Optional<SpeciesInfo> s = model.species(p.species());
+            if (s.isEmpty() || !s.get().boundary()) {
+                return false;
+            }
+        }
+        return !side.isEmpty();
+    }
+
+    /** A participant that is a boundary species or sits in an extracellular compartment. */
+    private static boolean anyOutside(ModelView model, List<Participant> side) {
+        for (Participant p : side) {
+            Optional<SpeciesInfo> s = model.species(p.species());
+            if (s.isPresent() && (s.get().boundary() || isExtracellular(model, s.get().compartment()))) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Compartment ids and names commonly used for the extracellular space (common practice). */
@@ -155,7 +175,7 @@ public final class ReactionClassifier {
 
     private static String stripCompartmentName(SpeciesInfo s) {
         // Names such as "ATP [cytoplasm]" carry the compartment; compare without it.
-        return s.name().replaceAll("\\s*\\[[^\\]]*\\]\\s*$", "").strip();
+        return COMPARTMENT_SUFFIX.matcher(s.name()).replaceAll("").strip();
     }
 
     private static String stem(SpeciesInfo s) {

@@ -9,10 +9,11 @@ import java.util.TreeMap;
  * Attribute texts of one species start tag, exactly as written (null when absent), plus what its
  * notes and annotation carry for the checks.
  *
- * @param notes  {@code KEY: value} lines of the notes (keys upper-cased, first occurrence wins)
- * @param inchis InChI strings from {@code rdf:resource} URIs of the annotation, in document order
+ * @param sboTerm the SBO term as {@code "SBO:0000247"}, or "" when unset or not of that form
+ * @param notes   {@code KEY: value} lines of the notes (keys upper-cased, first occurrence wins)
+ * @param inchis  InChI strings from {@code rdf:resource} URIs of the annotation, in document order
  */
-public record RawSpecies(String id, String formula, String fbcCharge, String sbmlCharge, int line,
+public record RawSpecies(String id, String formula, String fbcCharge, String sbmlCharge, String sboTerm, int line,
                          Map<String, String> notes, List<String> inchis) {
 
     public RawSpecies {
@@ -26,20 +27,22 @@ public record RawSpecies(String id, String formula, String fbcCharge, String sbm
         private final String formula;
         private final String fbcCharge;
         private final String sbmlCharge;
+        private final String sboTerm;
         private final int line;
         final Map<String, String> notes = new TreeMap<>();
         final List<String> inchis = new ArrayList<>();
 
-        Builder(String id, String formula, String fbcCharge, String sbmlCharge, int line) {
+        Builder(String id, String formula, String fbcCharge, String sbmlCharge, String sboTerm, int line) {
             this.id = id;
             this.formula = formula;
             this.fbcCharge = fbcCharge;
             this.sbmlCharge = sbmlCharge;
+            this.sboTerm = sboTerm;
             this.line = line;
         }
 
         RawSpecies build() {
-            return new RawSpecies(id, formula, fbcCharge, sbmlCharge, line, notes, inchis);
+            return new RawSpecies(id, formula, fbcCharge, sbmlCharge, sboTerm, line, notes, inchis);
         }
     }
 }

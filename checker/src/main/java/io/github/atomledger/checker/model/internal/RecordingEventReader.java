@@ -2,279 +2,282 @@ package io.github.atomledger.checker.model.internal;
 
 import io.github.atomledger.checker.AtomLedgerException;
 
-import java.net.URLDecoder;
-import java.nio.charset.StandardCharsets;
+import com.ctc.wstx.stax.WstxEventFactory;
+
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
+import java.util.NoSuchElementException;
+import java.util.Set;
 import java.util.TreeSet;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
-import javax.xml.namespace.QName;
+import javax.xml.stream.Location;
 import javax.xml.stream.XMLEventFactory;
 import javax.xml.stream.XMLEventReader;
+import javax.xml.stream.XMLStreamConstants;
 import javax.xml.stream.XMLStreamException;
+import javax.xml.stream.XMLStreamReader;
 import javax.xml.stream.events.Attribute;
-import javax.xml.stream.events.EndElement;
 import javax.xml.stream.events.Namespace;
-import javax.xml.stream.events.StartElement;
 import javax.xml.stream.events.XMLEvent;
-import javax.xml.stream.util.EventReaderDelegate;
 
 /**
- * Sits between the XML parser and JSBML. In the same single pass it
+ * Sits between the XML parser and JSBML: it walks the document once with a StAX cursor and hands
+ * JSBML, as events, only the part of the document the {@code ModelView} is built from. In the same
+ * pass it
  * <ul>
- *   <li>refuses DOCTYPE declarations (no DTD, no entities: the file is untrusted input),</li>
- *   <li>checks that the root element is {@code <sbml>},</li>
- *   <li>records the texts JSBML would turn into numbers (formula, charge, stoichiometry) and
- *       the line of every species, reaction and speciesReference tag,</li>
- *   <li>records every SId so that duplicates can be reported,</li>
- *   <li>rewrites the fbc version 3 namespace to version 2 so that JSBML 1.6.1 reads the rest of
- *       the package, and removes {@code fbc:charge} from what JSBML sees (we read the text
- *       ourselves: version 3 allows decimals, which JSBML would drop with an error),</li>
- *   <li>keeps {@code <notes>} and {@code <annotation>} away from JSBML: it reads the species'
- *       {@code KEY: value} note lines and InChI resource URIs itself, and JSBML never builds the
- *       XHTML and RDF trees no check reads (on yeast-GEM these were most of JSBML's time; see
- *       BENCHMARKS.md).</li>
+ *   <li>refuses DOCTYPE declarations and entity references (the file is untrusted input),</li>
+ *   <li>checks that the root element is {@code <sbml>} of Level 2 or 3,</li>
+ *   <li>records the texts JSBML would turn into numbers or drop (formula, charge, stoichiometry,
+ *       fbc versions 1 to 3, decimal charges included), the SBO terms, the line of every species,
+ *       reaction and speciesReference tag, whether a reference has {@code <stoichiometryMath>},
+ *       and every SId, so that duplicates can be reported,</li>
+ *   <li>reads the species' {@code <notes>} ({@code KEY: value} lines) and the InChI resource
+ *       URIs of their {@code <annotation>} itself.</li>
  * </ul>
- * Not thread-safe; one instance per read.
+ *
+ * <p>What JSBML sees ({@link #KEPT}): {@code sbml} (level, version and the core namespace),
+ * {@code model}, compartments, species, reactions and their species references, each with only the
+ * attributes the view reads from JSBML (ids, names, compartment, boundaryCondition, reversible,
+ * species). Everything else is withheld: notes, annotations, units, parameters and flux bounds,
+ * kinetic laws, rules, events, every package element and attribute (fbc objectives, gene
+ * products and associations, groups, layout, ...), {@code metaid} and {@code sboTerm}. JSBML 1.6.1
+ * parses an SBO term by loading the whole SBO ontology (about 0.1 s on first use), and no check
+ * reads any of the rest through JSBML; the texts it needs are recorded here. Events are made only
+ * for what JSBML sees: the withheld parts, most of a genome-scale file, are walked with the cursor.
+ * The events carry no location (JSBML 1.6.1 reads none; lines are recorded here).
+ *
+ * <p>Errors: a Woodstox {@link XMLStreamException} is rethrown by {@link #nextEvent()} and wrapped in
+ * an {@link IllegalStateException} by {@link #hasNext()}; refusals are {@link AtomLedgerException}s
+ * naming file and line. Not thread-safe; one instance per read.
  */
-public final class RecordingEventReader extends EventReaderDelegate {
+public final class RecordingEventReader implements XMLEventReader {
 
-    private static final String SBML_PREFIX = "http://www.sbml.org/sbml/level";
-    private static final String RDF = "http://www.w3.org/1999/02/22-rdf-syntax-ns#";
-    private static final Pattern FIELD = Pattern.compile("^\\s*([A-Za-z][A-Za-z0-9 _-]*?)\\s*:\\s*(.*?)\\s*$");
     public static final String FBC_PREFIX = "http://www.sbml.org/sbml/level3/version1/fbc/version";
-    private static final String FBC_V2 = FBC_PREFIX + "2";
-    private static final String FBC_V3 = FBC_PREFIX + "3";
+    private static final String SBML_PREFIX = "http://www.sbml.org/sbml/level";
 
+    /** The SBML core elements JSBML is shown, with the attributes it is shown on each. */
+    static final Map<String, Set<String>> KEPT = Map.ofEntries(
+            Map.entry("sbml", Set.of("level", "version")),
+            Map.entry("model", Set.of("id", "name")),
+            Map.entry("listOfCompartments", Set.of()),
+            Map.entry("compartment", Set.of("id", "name")),
+            Map.entry("listOfSpecies", Set.of()),
+            Map.entry("species", Set.of("id", "name", "compartment", "boundaryCondition")),
+            Map.entry("listOfReactions", Set.of()),
+            Map.entry("reaction", Set.of("id", "name", "reversible")),
+            Map.entry("listOfReactants", Set.of()),
+            Map.entry("listOfProducts", Set.of()),
+            Map.entry("listOfModifiers", Set.of()),
+            Map.entry("speciesReference", Set.of("species")),
+            Map.entry("modifierSpeciesReference", Set.of("species")));
+
+    private final XMLStreamReader in;
     private final String file;
-    private final XMLEventFactory events = XMLEventFactory.newInstance();
+    private final XMLEventFactory events = new WstxEventFactory();
+    private final ArrayDeque<XMLEvent> pending = new ArrayDeque<>();
+    private boolean ended;
+
     private final Map<String, RawSpecies.Builder> species = new LinkedHashMap<>();
     private final Map<String, RawReaction> reactions = new LinkedHashMap<>();
     private final Map<String, Integer> idCounts = new HashMap<>();
     private boolean rootSeen;
+    private String coreNamespace;
     private int fbcVersion;
-    private int level;
     private RawReaction currentReaction;
     private List<RawReaction.Ref> currentList;
     private boolean inModifiers;
-    private int opaqueDepth;
-    private String opaqueKind;
     private RawSpecies.Builder currentSpecies;
-    private int blockDepth;
-    private final StringBuilder blockText = new StringBuilder();
+    /** Depth inside a withheld element (0: JSBML sees the current element). */
+    private int withheldDepth;
+    private final OpaqueContent opaque = new OpaqueContent();
 
-    public RecordingEventReader(XMLEventReader parent, String file) {
-        super(parent);
+    public RecordingEventReader(XMLStreamReader in, String file) {
+        this.in = in;
         this.file = file;
-    }
-
-    @Override
-    public XMLEvent nextEvent() throws XMLStreamException {
-        skipOpaque();
-        XMLEvent e = super.nextEvent();
-        observe(e);
-        return rewrite(e);
     }
 
     @Override
     public boolean hasNext() {
         try {
-            skipOpaque();
+            fill();
         } catch (XMLStreamException e) {
             throw new IllegalStateException(e);
         }
-        return super.hasNext();
+        return !pending.isEmpty();
     }
 
-    /**
-     * Consumes a whole {@code <notes>} or {@code <annotation>} element (observing its events) when
-     * it is next, so JSBML never sees it.
-     */
-    private void skipOpaque() throws XMLStreamException {
-        while (rootSeen && super.hasNext()) {
-            XMLEvent next = super.peek();
-            if (next == null || !next.isStartElement() || opaqueDepth > 0 || !isOpaque(next.asStartElement())) {
-                return;
-            }
-            do {
-                observe(super.nextEvent());
-            } while (opaqueDepth > 0 && super.hasNext());
+    @Override
+    public XMLEvent nextEvent() throws XMLStreamException {
+        fill();
+        if (pending.isEmpty()) {
+            throw new NoSuchElementException("end of the document");
         }
-    }
-
-    private static boolean isOpaque(StartElement s) {
-        String local = s.getName().getLocalPart();
-        return (local.equals("notes") || local.equals("annotation")) && s.getName().getNamespaceURI().startsWith(SBML_PREFIX);
+        return pending.poll();
     }
 
     @Override
     public Object next() {
         try {
             return nextEvent();
-        } catch (XMLStreamException ex) {
-            throw new IllegalStateException(ex);
+        } catch (XMLStreamException e) {
+            throw new IllegalStateException(e);
         }
     }
 
     @Override
     public XMLEvent peek() throws XMLStreamException {
-        skipOpaque();
-        XMLEvent e = super.peek();
-        return e == null ? null : rewrite(e);
+        fill();
+        return pending.peek();
     }
 
     @Override
     public XMLEvent nextTag() throws XMLStreamException {
         XMLEvent e = nextEvent();
-        while (e.isCharacters() && e.asCharacters().isWhiteSpace() || e.isProcessingInstruction()
-                || e.getEventType() == XMLEvent.COMMENT) {
+        while (!e.isStartElement() && !e.isEndElement()) {
             e = nextEvent();
         }
         return e;
     }
 
-    private void observe(XMLEvent e) {
-        int line = e.getLocation() == null ? 0 : Math.max(0, e.getLocation().getLineNumber());
-        if (e.getEventType() == XMLEvent.DTD) {
-            throw new AtomLedgerException(file + ":" + line
-                    + ": DOCTYPE declarations are refused (SBML needs none, and a DTD can pull in other files)");
-        }
-        if (e.getEventType() == XMLEvent.ENTITY_REFERENCE) {
-            throw new AtomLedgerException(file + ":" + line + ": entity references are refused");
-        }
-        if (e.isStartElement()) {
-            startElement(e.asStartElement(), line);
-        } else if (e.isEndElement()) {
-            endElement(e.asEndElement());
-        } else if (blockDepth > 0 && e.isCharacters()) {
-            blockText.append(e.asCharacters().getData());
+    /** Unsupported: JSBML reads no element text, and the reader withholds every text-bearing element. */
+    @Override
+    public String getElementText() {
+        throw new UnsupportedOperationException("getElementText");
+    }
+
+    @Override
+    public Object getProperty(String name) {
+        return in.getProperty(name);
+    }
+
+    @Override
+    public void close() throws XMLStreamException {
+        in.close();
+    }
+
+    private void fill() throws XMLStreamException {
+        while (pending.isEmpty() && !ended) {
+            step();
         }
     }
 
-    private void startElement(StartElement s, int line) {
-        String local = s.getName().getLocalPart();
-        if (!rootSeen) {
-            rootSeen = true;
-            String ns = s.getName().getNamespaceURI();
-            if (!local.equals("sbml") || !ns.startsWith("http://www.sbml.org/sbml/level")) {
-                throw new AtomLedgerException(file + ":" + line + ": not an SBML file: the root element is <"
-                        + local + "> in namespace '" + ns + "', expected <sbml> in an SBML namespace");
-            }
-            level = parseIntOr(attr(s, "level"), 0);
-            if (level != 2 && level != 3) {
-                throw new AtomLedgerException(file + ":" + line + ": SBML Level " + attr(s, "level")
-                        + " is not supported; AtomLedger reads Level 2 and Level 3");
-            }
-            for (Iterator<?> it = s.getNamespaces(); it.hasNext(); ) {
-                String uri = ((Namespace) it.next()).getNamespaceURI();
-                if (uri.startsWith(FBC_PREFIX)) {
-                    fbcVersion = parseIntOr(uri.substring(FBC_PREFIX.length()), 0);
+    /** Handles the cursor's current token, then advances it. */
+    private void step() throws XMLStreamException {
+        int type = in.getEventType();
+        switch (type) {
+            case XMLStreamConstants.START_DOCUMENT -> pending.add(in.getCharacterEncodingScheme() == null
+                    ? events.createStartDocument() : events.createStartDocument(in.getCharacterEncodingScheme()));
+            case XMLStreamConstants.DTD -> throw new AtomLedgerException(file + ":" + line()
+                    + ": DOCTYPE declarations are refused (SBML needs none, and a DTD can pull in other files)");
+            case XMLStreamConstants.ENTITY_REFERENCE ->
+                    throw new AtomLedgerException(file + ":" + line() + ": entity references are refused");
+            case XMLStreamConstants.START_ELEMENT -> startElement();
+            case XMLStreamConstants.END_ELEMENT -> endElement();
+            case XMLStreamConstants.CHARACTERS, XMLStreamConstants.CDATA, XMLStreamConstants.SPACE -> {
+                if (opaque.inside()) {
+                    opaque.text(in);
                 }
             }
-            return;
-        }
-        if (opaqueDepth > 0) {
-            opaqueDepth++;
-            insideOpaque(s, local);
-            return;
-        }
-        if (local.equals("annotation") || local.equals("notes")) {
-            opaqueDepth = 1;
-            opaqueKind = local;
-            return;
-        }
-        String id = attr(s, "id");
-        if (id == null) {
-            id = fbcAttr(s, "id");
-        }
-        // Unit definitions have their own id space (UnitSId) in SBML.
-        if (id != null && !local.equals("unitDefinition")) {
-            idCounts.merge(id, 1, Integer::sum);
-        }
-        switch (local) {
-            case "species" -> {
-                currentSpecies = new RawSpecies.Builder(id, fbcAttr(s, "chemicalFormula"), fbcAttr(s, "charge"),
-                        attr(s, "charge"), line);
-                species.putIfAbsent(id == null ? "" : id, currentSpecies);
-            }
-            case "reaction" -> {
-                currentReaction = new RawReaction(id == null ? "" : id, line);
-                reactions.putIfAbsent(currentReaction.id(), currentReaction);
-            }
-            case "listOfReactants" -> currentList = currentReaction == null ? null : currentReaction.reactants();
-            case "listOfProducts" -> currentList = currentReaction == null ? null : currentReaction.products();
-            case "listOfModifiers" -> inModifiers = true;
-            case "speciesReference" -> {
-                if (currentList != null) {
-                    currentList.add(new RawReaction.Ref(nullToEmpty(attr(s, "species")), attr(s, "stoichiometry"), line));
-                }
-            }
-            case "modifierSpeciesReference" -> {
-                if (inModifiers && currentReaction != null) {
-                    currentReaction.modifiers().add(nullToEmpty(attr(s, "species")));
-                }
+            case XMLStreamConstants.END_DOCUMENT -> {
+                pending.add(events.createEndDocument());
+                ended = true;
+                return;
             }
             default -> {
+                // comments and processing instructions: nothing JSBML needs
             }
         }
+        in.next();
     }
 
-    /** Inside a species' notes: collect block texts; inside its annotation: InChI resources. */
-    private void insideOpaque(StartElement s, String local) {
-        if (currentSpecies == null) {
+    /** The line of the current token (Woodstox makes a new location object per call: only where a line is kept). */
+    private int line() {
+        Location location = in.getLocation();
+        return location == null ? 0 : Math.max(0, location.getLineNumber());
+    }
+
+    private void startElement() {
+        String local = in.getLocalName();
+        if (!rootSeen) {
+            root(local, line());
             return;
         }
-        if (opaqueKind.equals("notes")) {
-            if (blockDepth > 0 || isBlock(local)) {
-                blockDepth++;
-            }
+        if (opaque.inside()) {
+            withheldDepth++;
+            opaque.start(in);
             return;
         }
-        Attribute resource = s.getAttributeByName(new QName(RDF, "resource"));
-        if (resource != null) {
-            String uri = resource.getValue();
-            int at = uri.indexOf("InChI=");
-            if (at >= 0 && uri.toLowerCase(Locale.ROOT).contains("inchi")) {
-                String value = uri.substring(at);
-                if (value.contains("%")) {
-                    value = URLDecoder.decode(value, StandardCharsets.UTF_8);
-                }
-                if (!currentSpecies.inchis.contains(value)) {
-                    currentSpecies.inchis.add(value);
-                }
-            }
-        }
-    }
-
-    private static boolean isBlock(String name) {
-        return name.equals("p") || name.equals("li") || name.equals("div") || name.equals("td");
-    }
-
-    private void endBlock() {
-        for (String textLine : blockText.toString().split("\\R")) {
-            Matcher m = FIELD.matcher(textLine);
-            if (m.matches()) {
-                currentSpecies.notes.putIfAbsent(m.group(1).strip().toUpperCase(Locale.ROOT), m.group(2));
-            }
-        }
-        blockText.setLength(0);
-    }
-
-    private void endElement(EndElement e) {
-        if (opaqueDepth > 0) {
-            opaqueDepth--;
-            if (blockDepth > 0 && --blockDepth == 0) {
-                endBlock();
-            }
+        if (OpaqueContent.isOpaque(local)) {
+            withheldDepth++;
+            opaque.open(local, currentSpecies);
             return;
         }
-        switch (e.getName().getLocalPart()) {
+        record(local);
+        if (withheldDepth > 0 || !coreNamespace.equals(in.getNamespaceURI()) || !KEPT.containsKey(local)) {
+            withheldDepth++;
+            return;
+        }
+        emitStart(local, List.of());
+    }
+
+    private void root(String local, int line) {
+        rootSeen = true;
+        String ns = in.getNamespaceURI() == null ? "" : in.getNamespaceURI();
+        if (!local.equals("sbml") || !ns.startsWith(SBML_PREFIX)) {
+            throw new AtomLedgerException(file + ":" + line + ": not an SBML file: the root element is <"
+                    + local + "> in namespace '" + ns + "', expected <sbml> in an SBML namespace");
+        }
+        int level = parseIntOr(in.getAttributeValue(null, "level"), 0);
+        if (level != 2 && level != 3) {
+            throw new AtomLedgerException(file + ":" + line + ": SBML Level " + in.getAttributeValue(null, "level")
+                    + " is not supported; AtomLedger reads Level 2 and Level 3");
+        }
+        coreNamespace = ns;
+        List<Namespace> declared = new ArrayList<>();
+        for (int i = 0; i < in.getNamespaceCount(); i++) {
+            String uri = in.getNamespaceURI(i);
+            if (uri != null && uri.startsWith(FBC_PREFIX)) {
+                fbcVersion = parseIntOr(uri.substring(FBC_PREFIX.length()), 0);
+            }
+            if (ns.equals(uri)) {
+                String prefix = in.getNamespacePrefix(i);
+                declared.add(prefix == null || prefix.isEmpty() ? events.createNamespace(uri)
+                        : events.createNamespace(prefix, uri));
+            }
+        }
+        emitStart(local, declared);
+    }
+
+    private void emitStart(String local, List<Namespace> namespaces) {
+        Set<String> kept = KEPT.get(local);
+        List<Attribute> attributes = new ArrayList<>(kept.size());
+        for (int i = 0; i < in.getAttributeCount(); i++) {
+            String ns = in.getAttributeNamespace(i);
+            String name = in.getAttributeLocalName(i);
+            if ((ns == null || ns.isEmpty()) && kept.contains(name)) {
+                attributes.add(events.createAttribute(name, in.getAttributeValue(i)));
+            }
+        }
+        String prefix = in.getPrefix();
+        pending.add(events.createStartElement(prefix == null ? "" : prefix, coreNamespace, local,
+                attributes.iterator(), namespaces.iterator()));
+    }
+
+    private void endElement() {
+        if (withheldDepth > 0) {
+            withheldDepth--;
+            if (opaque.inside()) {
+                opaque.end();
+                return;
+            }
+        } else {
+            String prefix = in.getPrefix();
+            pending.add(events.createEndElement(prefix == null ? "" : prefix, coreNamespace, in.getLocalName()));
+        }
+        switch (in.getLocalName()) {
             case "species" -> currentSpecies = null;
             case "reaction" -> currentReaction = null;
             case "listOfReactants", "listOfProducts" -> currentList = null;
@@ -284,56 +287,70 @@ public final class RecordingEventReader extends EventReaderDelegate {
         }
     }
 
-    private XMLEvent rewrite(XMLEvent e) {
-        if (e.isStartElement()) {
-            StartElement s = e.asStartElement();
-            boolean change = fbcVersion == 3 || (s.getName().getLocalPart().equals("species") && fbcAttr(s, "charge") != null);
-            if (!change) {
-                return e;
+    /** Records ids, texts and lines of an element outside notes and annotations. */
+    private void record(String local) {
+        String id = in.getAttributeValue(null, "id");
+        if (id == null) {
+            id = fbcAttr("id");
+        }
+        // Unit definitions have their own id space (UnitSId) in SBML.
+        if (id != null && !local.equals("unitDefinition")) {
+            idCounts.merge(id, 1, Integer::sum);
+        }
+        switch (local) {
+            case "species" -> {
+                currentSpecies = new RawSpecies.Builder(id, fbcAttr("chemicalFormula"), fbcAttr("charge"),
+                        in.getAttributeValue(null, "charge"), sboTerm(), line());
+                species.putIfAbsent(id == null ? "" : id, currentSpecies);
             }
-            List<Attribute> attrs = new ArrayList<>();
-            for (Iterator<?> it = s.getAttributes(); it.hasNext(); ) {
-                Attribute a = (Attribute) it.next();
-                if (a.getName().getNamespaceURI().startsWith(FBC_PREFIX) && a.getName().getLocalPart().equals("charge")
-                        && s.getName().getLocalPart().equals("species")) {
-                    continue;
+            case "reaction" -> {
+                currentReaction = new RawReaction(id == null ? "" : id, line(), sboTerm());
+                reactions.putIfAbsent(currentReaction.id(), currentReaction);
+            }
+            case "listOfReactants" -> currentList = currentReaction == null ? null : currentReaction.reactants();
+            case "listOfProducts" -> currentList = currentReaction == null ? null : currentReaction.products();
+            case "listOfModifiers" -> inModifiers = true;
+            case "speciesReference" -> {
+                if (currentList != null) {
+                    currentList.add(new RawReaction.Ref(nullToEmpty(in.getAttributeValue(null, "species")),
+                            in.getAttributeValue(null, "stoichiometry"), line(), false));
                 }
-                attrs.add(events.createAttribute(fix(a.getName()), a.getValue()));
             }
-            List<Namespace> nss = new ArrayList<>();
-            for (Iterator<?> it = s.getNamespaces(); it.hasNext(); ) {
-                Namespace n = (Namespace) it.next();
-                nss.add(FBC_V3.equals(n.getNamespaceURI()) ? events.createNamespace(n.getPrefix(), FBC_V2) : n);
+            case "stoichiometryMath" -> {
+                if (currentList != null && !currentList.isEmpty()) {
+                    int last = currentList.size() - 1;
+                    currentList.set(last, currentList.get(last).withStoichiometryMath());
+                }
             }
-            events.setLocation(s.getLocation());
-            QName n = fix(s.getName());
-            return events.createStartElement(n.getPrefix(), n.getNamespaceURI(), n.getLocalPart(), attrs.iterator(),
-                    nss.iterator(), s.getNamespaceContext());
-        }
-        if (e.isEndElement() && fbcVersion == 3) {
-            EndElement end = e.asEndElement();
-            if (FBC_V3.equals(end.getName().getNamespaceURI())) {
-                events.setLocation(end.getLocation());
-                return events.createEndElement(fix(end.getName()), end.getNamespaces());
+            case "modifierSpeciesReference" -> {
+                if (inModifiers && currentReaction != null) {
+                    currentReaction.modifiers().add(nullToEmpty(in.getAttributeValue(null, "species")));
+                }
+            }
+            default -> {
             }
         }
-        return e;
     }
 
-    private static QName fix(QName q) {
-        return FBC_V3.equals(q.getNamespaceURI()) ? new QName(FBC_V2, q.getLocalPart(), q.getPrefix()) : q;
+    /** The sboTerm attribute when it has the form JSBML accepts ({@code SBO:} and seven digits), else "". */
+    private String sboTerm() {
+        String text = in.getAttributeValue(null, "sboTerm");
+        if (text == null || text.length() != 11 || !text.startsWith("SBO:")) {
+            return "";
+        }
+        for (int i = 4; i < 11; i++) {
+            if (text.charAt(i) < '0' || text.charAt(i) > '9') {
+                return "";
+            }
+        }
+        return text;
     }
 
-    private static String attr(StartElement s, String name) {
-        Attribute a = s.getAttributeByName(new QName(name));
-        return a == null ? null : a.getValue();
-    }
-
-    private static String fbcAttr(StartElement s, String name) {
-        for (Iterator<?> it = s.getAttributes(); it.hasNext(); ) {
-            Attribute a = (Attribute) it.next();
-            if (a.getName().getLocalPart().equals(name) && a.getName().getNamespaceURI().startsWith(FBC_PREFIX)) {
-                return a.getValue();
+    private String fbcAttr(String name) {
+        for (int i = 0; i < in.getAttributeCount(); i++) {
+            String ns = in.getAttributeNamespace(i);
+            if (ns != null && ns.startsWith(FBC_PREFIX) && in.getAttributeLocalName(i).equals(name)) {
+                return in.getAttributeValue(i);
             }
         }
         return null;
