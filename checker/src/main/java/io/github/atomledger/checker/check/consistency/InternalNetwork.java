@@ -31,8 +31,34 @@ import java.util.TreeMap;
  */
 record InternalNetwork(List<String> species, List<Formula> formulas, List<Column> columns) {
 
-    /** The net stoichiometry of one reaction: species index to non-zero coefficient, sorted. */
-    record Column(String reaction, Map<Integer, Rational> entries) {
+    /**
+     * The net stoichiometry of one reaction: species index to non-zero coefficient, sorted.
+     * {@code species} and {@code whole} repeat the entries with every coefficient multiplied by their
+     * common denominator, as whole numbers (the equations Σ c_i m_i = 0 are homogeneous, so the
+     * factor changes nothing); {@code whole} is null when they do not fit in a long.
+     */
+    record Column(String reaction, Map<Integer, Rational> entries, int[] species, long[] whole) {
+
+        Column(String reaction, Map<Integer, Rational> entries) {
+            this(reaction, entries, entries.keySet().stream().mapToInt(Integer::intValue).toArray(), whole(entries));
+        }
+
+        private static long[] whole(Map<Integer, Rational> entries) {
+            java.math.BigInteger lcd = java.math.BigInteger.ONE;
+            for (Rational c : entries.values()) {
+                lcd = lcd.divide(lcd.gcd(c.denominator())).multiply(c.denominator());
+            }
+            long[] out = new long[entries.size()];
+            int k = 0;
+            for (Rational c : entries.values()) {
+                java.math.BigInteger v = c.numerator().multiply(lcd.divide(c.denominator()));
+                if (v.bitLength() > 62) {
+                    return null;
+                }
+                out[k++] = v.longValue();
+            }
+            return out;
+        }
     }
 
     InternalNetwork {
@@ -76,6 +102,66 @@ record InternalNetwork(List<String> species, List<Formula> formulas, List<Column
         return new InternalNetwork(species, formulas, columns);
     }
 
+    /** True when {@code masses} (species index to mass, absent = 0) is conserved by every reaction. */
+    boolean conserves(Map<Integer, Rational> masses) {
+        long[] scaled = scaled(masses);
+        for (Column c : columns) {
+            // Σ c_i m_i = 0 exactly iff the same sum over whole coefficients and the masses times their
+            // common denominator is 0: long arithmetic when everything fits, rationals otherwise.
+            Boolean zero = scaled == null || c.whole() == null ? null : wholeSumIsZero(c, scaled);
+            if (zero == null) {
+                Rational sum = Rational.ZERO;
+                for (Map.Entry<Integer, Rational> e : c.entries().entrySet()) {
+                    Rational m = masses.get(e.getKey());
+                    if (m != null) {
+                        sum = sum.add(e.getValue().multiply(m));
+                    }
+                }
+                zero = sum.isZero();
+            }
+            if (!zero) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** Masses times their common denominator, as longs; null when they do not fit. */
+    private long[] scaled(Map<Integer, Rational> masses) {
+        java.math.BigInteger lcd = java.math.BigInteger.ONE;
+        for (Rational m : masses.values()) {
+            java.math.BigInteger d = m.denominator();
+            if (!d.equals(lcd) && !d.equals(java.math.BigInteger.ONE)) {
+                lcd = lcd.divide(lcd.gcd(d)).multiply(d);
+                if (lcd.bitLength() > 62) {
+                    return null;
+                }
+            }
+        }
+        long[] out = new long[species.size()];
+        for (Map.Entry<Integer, Rational> e : masses.entrySet()) {
+            java.math.BigInteger v = e.getValue().numerator().multiply(lcd.divide(e.getValue().denominator()));
+            if (v.bitLength() > 62) {
+                return null;
+            }
+            out[e.getKey()] = v.longValue();
+        }
+        return out;
+    }
+
+    /** Whether Σ whole_i m_i is zero; null when a step overflows. */
+    private static Boolean wholeSumIsZero(Column c, long[] masses) {
+        long sum = 0;
+        try {
+            for (int k = 0; k < c.species().length; k++) {
+                sum = Math.addExact(sum, Math.multiplyExact(c.whole()[k], masses[c.species()[k]]));
+            }
+        } catch (ArithmeticException overflow) {
+            return null;
+        }
+        return sum == 0;
+    }
+
     static boolean isInternal(ReactionClass c) {
         return c == ReactionClass.INTERNAL || c == ReactionClass.TRANSPORT || c == ReactionClass.ATP_MAINTENANCE;
     }
@@ -93,22 +179,5 @@ record InternalNetwork(List<String> species, List<Formula> formulas, List<Column
         fluxes.forEach((j, v) -> columns.get(j).entries().forEach((i, c) -> net.merge(i, c.multiply(v), Rational::add)));
         net.values().removeIf(Rational::isZero);
         return net;
-    }
-
-    /** True when {@code masses} (species index to mass, absent = 0) is conserved by every reaction. */
-    boolean conserves(Map<Integer, Rational> masses) {
-        for (Column c : columns) {
-            Rational sum = Rational.ZERO;
-            for (Map.Entry<Integer, Rational> e : c.entries().entrySet()) {
-                Rational m = masses.get(e.getKey());
-                if (m != null) {
-                    sum = sum.add(e.getValue().multiply(m));
-                }
-            }
-            if (!sum.isZero()) {
-                return false;
-            }
-        }
-        return true;
     }
 }

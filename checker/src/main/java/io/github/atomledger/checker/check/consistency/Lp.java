@@ -94,6 +94,10 @@ final class Lp {
     }
 
     static double toDouble(Rational r) {
+        if (r.numerator().bitLength() <= 53 && r.denominator().bitLength() <= 53) {
+            // Both exact as doubles, so one division rounds the quotient correctly.
+            return r.numerator().doubleValue() / r.denominator().doubleValue();
+        }
         return new BigDecimal(r.numerator()).divide(new BigDecimal(r.denominator()), MathContext.DECIMAL64).doubleValue();
     }
 

@@ -115,8 +115,12 @@ final class MassFamily {
     private static List<Map<Integer, Rational>> rows(InternalNetwork network, List<Map<Integer, Rational>> mass) {
         Map<String, Map<Integer, Rational>> distinct = new LinkedHashMap<>();
         for (InternalNetwork.Column c : network.columns()) {
-            Map<Integer, Rational> row = new TreeMap<>();
-            c.entries().forEach((i, s) -> mass.get(i).forEach((j, a) -> row.merge(j, s.multiply(a), Rational::add)));
+            Map<Integer, Rational> row = wholeRow(c, mass);
+            if (row == null) {
+                Map<Integer, Rational> exact = new TreeMap<>();
+                c.entries().forEach((i, s) -> mass.get(i).forEach((j, a) -> exact.merge(j, s.multiply(a), Rational::add)));
+                row = exact;
+            }
             row.values().removeIf(Rational::isZero);
             if (row.isEmpty()) {
                 continue;
@@ -127,6 +131,35 @@ final class MassFamily {
             distinct.putIfAbsent(key.toString(), row);
         }
         return new ArrayList<>(distinct.values());
+    }
+
+    /**
+     * The row of a reaction with whole coefficients (a positive multiple of the exact row: the
+     * equation is homogeneous), in long arithmetic; null when something does not fit.
+     */
+    private static Map<Integer, Rational> wholeRow(InternalNetwork.Column c, List<Map<Integer, Rational>> mass) {
+        if (c.whole() == null) {
+            return null;
+        }
+        Map<Integer, long[]> sums = new TreeMap<>();
+        try {
+            for (int k = 0; k < c.species().length; k++) {
+                long s = c.whole()[k];
+                for (Map.Entry<Integer, Rational> e : mass.get(c.species()[k]).entrySet()) {
+                    Rational a = e.getValue();
+                    if (!a.isInteger() || a.numerator().bitLength() > 62) {
+                        return null;
+                    }
+                    long[] acc = sums.computeIfAbsent(e.getKey(), x -> new long[1]);
+                    acc[0] = Math.addExact(acc[0], Math.multiplyExact(s, a.numerator().longValue()));
+                }
+            }
+        } catch (ArithmeticException overflow) {
+            return null;
+        }
+        Map<Integer, Rational> row = new TreeMap<>();
+        sums.forEach((j, acc) -> row.put(j, Rational.of(acc[0])));
+        return row;
     }
 
     /** Largest-support LP on the presolved rows; the value of every family variable, or null when undecided. */
