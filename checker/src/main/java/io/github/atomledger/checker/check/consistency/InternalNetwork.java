@@ -44,20 +44,37 @@ record InternalNetwork(List<String> species, List<Formula> formulas, List<Column
         }
 
         private static long[] whole(Map<Integer, Rational> entries) {
-            java.math.BigInteger lcd = java.math.BigInteger.ONE;
+            long lcd = 1;
             for (Rational c : entries.values()) {
-                lcd = lcd.divide(lcd.gcd(c.denominator())).multiply(c.denominator());
+                if (c.denominator().bitLength() > 62 || c.numerator().bitLength() > 62) {
+                    return null;
+                }
+                long d = c.denominator().longValue();
+                try {
+                    lcd = Math.multiplyExact(lcd / gcd(lcd, d), d);
+                } catch (ArithmeticException overflow) {
+                    return null;
+                }
             }
             long[] out = new long[entries.size()];
             int k = 0;
             for (Rational c : entries.values()) {
-                java.math.BigInteger v = c.numerator().multiply(lcd.divide(c.denominator()));
-                if (v.bitLength() > 62) {
+                try {
+                    out[k++] = Math.multiplyExact(c.numerator().longValue(), lcd / c.denominator().longValue());
+                } catch (ArithmeticException overflow) {
                     return null;
                 }
-                out[k++] = v.longValue();
             }
             return out;
+        }
+
+        private static long gcd(long a, long b) {
+            while (b != 0) {
+                long t = a % b;
+                a = b;
+                b = t;
+            }
+            return a;
         }
     }
 
