@@ -20,7 +20,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Benchmark for issue 8 (run with {@code -Pbench}): on yeast-GEM, a bare StAX pass (the floor), JSBML's read
- * alone, our loader, the balance checks (everything but the consistency LP) and the full engine, each in fresh
+ * alone, our loader, the balance checks (everything but the consistency test) and the full engine, each in fresh
  * JVMs (cold, process wall time and in-process time) and warm (repeats in one JVM); medians and ratios to the
  * floor, measured in one run. Then a synthetic 15,000-reaction model checked with -Xmx1g. Prints a Markdown
  * table and writes it to target/bench/balance.md; BENCHMARKS.md records the figures. No timing assertion.
@@ -88,7 +88,7 @@ class BalanceBenchmarkTest {
         double floorCpu = 0;
         double floorWarm = 0;
         for (String mode : List.of("stax", "jsbml", "load", "balance", "engine")) {
-            int cold = mode.equals("engine") ? 1 : COLD_RUNS;
+            int cold = COLD_RUNS;
             double[] wall = new double[cold];
             double[] inProc = new double[cold];
             double[] cpu = new double[cold];
@@ -98,7 +98,7 @@ class BalanceBenchmarkTest {
                 inProc[i] = r.inProcessMs()[0];
                 cpu[i] = r.processCpuMs();
             }
-            int warmRuns = mode.equals("engine") ? 2 : WARM_RUNS;
+            int warmRuns = WARM_RUNS;
             Run warm = fork(mode, yeast, warmRuns, "2g", out.resolve("reports-" + mode));
             double[] lastHalf = Arrays.copyOfRange(warm.inProcessMs(), warmRuns / 2, warmRuns);
             double[] lastCpu = Arrays.copyOfRange(warm.cpuMs(), warmRuns / 2, warmRuns);
