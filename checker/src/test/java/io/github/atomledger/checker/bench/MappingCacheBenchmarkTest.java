@@ -39,7 +39,7 @@ class MappingCacheBenchmarkTest {
         int threads = Runtime.getRuntime().availableProcessors();
         RunConfig config = RunConfig.defaults(model.getParent(), List.of(model.getFileName().toString()))
                 .withMapping(new MappingConfig(true, table, MappingOptions.defaults(), threads, cache))
-                // The consistency LP (about 9 s here) is not cached; it is measured in the balance benchmark.
+                // The consistency test is not cached; it is measured in the balance benchmark.
                 .withPolicy(io.github.atomledger.checker.engine.SeverityPolicy.of(
                         java.util.Map.of("balance.mass-inconsistent", "off"), java.util.Map.of(),
                         io.github.atomledger.checker.check.StandardChecks.all()));
