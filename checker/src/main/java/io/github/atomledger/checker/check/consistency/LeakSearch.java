@@ -40,11 +40,9 @@ final class LeakSearch {
      *
      * @param fluxes column index of the internal network to exact coefficient, non-zero only
      * @param net    species index to the exact amount made (all positive)
-     * @param lumps  the lumped combinations it uses
      */
-    record Leak(TreeMap<Integer, Rational> fluxes, TreeMap<Integer, Rational> net, TreeSet<Integer> lumps) {
+    record Leak(TreeMap<Integer, Rational> fluxes, TreeMap<Integer, Rational> net) {
     }
-
 
     /** A lumped combination of reactions: its net stoichiometry and the reactions it is made of. */
     private record Lump(Map<Integer, Rational> entries, Map<Integer, Rational> parts) {
@@ -279,14 +277,12 @@ final class LeakSearch {
         Map<Integer, Rational> free = new TreeMap<>();
         support.forEach(j -> free.put(j, Lp.nearbyFraction(guess[j] / scale)));
         TreeMap<Integer, Rational> fluxes = new TreeMap<>();
-        TreeMap<Integer, Rational> exactLumps = e.solve(free);
-        exactLumps.forEach((j, x) -> lumps.get(j).parts().forEach((r, f) -> fluxes.merge(r, f.multiply(x), Rational::add)));
+        e.solve(free).forEach((j, x) -> lumps.get(j).parts().forEach((r, f) -> fluxes.merge(r, f.multiply(x), Rational::add)));
         fluxes.values().removeIf(Rational::isZero);
         TreeMap<Integer, Rational> net = network.net(fluxes);
         if (net.isEmpty() || net.values().stream().anyMatch(x -> x.signum() < 0)) {
             return null;
         }
-        TreeSet<Integer> used = new TreeSet<>(exactLumps.keySet());
-        return new Leak(fluxes, net, used);
+        return new Leak(fluxes, net);
     }
 }
