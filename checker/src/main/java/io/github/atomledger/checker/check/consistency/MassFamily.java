@@ -169,6 +169,14 @@ final class MassFamily {
         if (roots.isEmpty()) {
             return x;
         }
+        if (pre.rows().stream().allMatch(row -> row.values().stream().reduce(Rational.ZERO, Rational::add).isZero())) {
+            // Every root at 1 satisfies what the presolve left (nothing, on a balanced model with
+            // formulas): the largest support without an LP.
+            for (int j = 0; j < variables; j++) {
+                x[j] = pre.zero(j) ? 0 : Lp.toDouble(pre.ratio(j));
+            }
+            return x;
+        }
         Lp lp = new Lp(budget);
         Map<Integer, Integer> column = new HashMap<>();
         for (int root : roots) {
