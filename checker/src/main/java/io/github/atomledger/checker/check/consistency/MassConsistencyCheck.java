@@ -106,13 +106,13 @@ public final class MassConsistencyCheck implements ModelCheck {
         Map<String, String> data = new TreeMap<>();
         data.put("metabolites", Integer.toString(r.metabolites()));
         data.put("reactions", Integer.toString(r.reactions()));
-        data.put("budgetMs", Long.toString(StoichiometricConsistency.LP_TIME_BUDGET_MS));
+        data.put("budgetMs", Long.toString(analysis.budgetMillis()));
         data.put("undeterminedCount", Integer.toString(r.undetermined().size()));
         data.put("undetermined", String.join(",", r.undetermined()));
         String message = r.undecided()
                 ? "The stoichiometric consistency of " + r.reactions() + " internal reactions over " + r.metabolites()
                         + " metabolites could not be decided within the solver's budget of "
-                        + StoichiometricConsistency.LP_TIME_BUDGET_MS + " ms per LP."
+                        + analysis.budgetMillis() + " ms per LP."
                 : "The stoichiometric consistency of " + r.undetermined().size() + " metabolite(s) could not be proven either"
                         + " way (" + shown(new ArrayList<>(r.undetermined())) + ").";
         return context.finding(this, context.model().modelId(), 0, message, data);

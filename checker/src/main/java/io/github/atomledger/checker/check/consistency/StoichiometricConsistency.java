@@ -57,6 +57,11 @@ public final class StoichiometricConsistency {
         this.budget = budget;
     }
 
+    /** The wall-clock budget of one LP solve, in milliseconds. */
+    long budgetMillis() {
+        return budget.millis();
+    }
+
     /** Tests the internal network of the model in {@code context}. */
     public ConsistencyResult analyse(CheckContext context) {
         return analyse(InternalNetwork.of(context));
