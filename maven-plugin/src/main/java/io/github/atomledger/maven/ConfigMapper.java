@@ -11,7 +11,7 @@ import io.github.atomledger.checker.engine.SeverityPolicy;
 import io.github.atomledger.checker.gate.FailScope;
 import io.github.atomledger.checker.gate.Gate;
 import io.github.atomledger.checker.gate.GateConfig;
-import io.github.atomledger.checker.report.ReportFormat;
+import io.github.atomledger.checker.engine.ReportFormat;
 
 import java.io.File;
 import java.time.Duration;

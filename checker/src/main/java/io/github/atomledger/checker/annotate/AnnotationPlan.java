@@ -1,5 +1,7 @@
 package io.github.atomledger.checker.annotate;
 
+import io.github.atomledger.checker.transitions.StoredStructure;
+import io.github.atomledger.checker.transitions.TransitionAnnotation;
 import io.github.atomledger.atommapper.mapping.AtomMapper;
 import io.github.atomledger.checker.check.mapping.MapStatus;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;

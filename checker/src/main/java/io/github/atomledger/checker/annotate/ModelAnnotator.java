@@ -1,5 +1,8 @@
 package io.github.atomledger.checker.annotate;
 
+import io.github.atomledger.checker.transitions.TransitionAnnotation;
+import io.github.atomledger.checker.transitions.ModelText;
+import io.github.atomledger.checker.transitions.AnnotationIndex;
 import io.github.atomledger.checker.AtomLedgerException;
 
 import java.io.IOException;

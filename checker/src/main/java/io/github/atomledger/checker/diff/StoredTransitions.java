@@ -2,8 +2,8 @@ package io.github.atomledger.checker.diff;
 
 import io.github.atomledger.atommapper.mapping.AtomTransition;
 import io.github.atomledger.checker.AtomLedgerException;
-import io.github.atomledger.checker.annotate.AnnotationIndex;
-import io.github.atomledger.checker.annotate.TransitionAnnotation;
+import io.github.atomledger.checker.transitions.AnnotationIndex;
+import io.github.atomledger.checker.transitions.TransitionAnnotation;
 import io.github.atomledger.checker.engine.ModelResult;
 import io.github.atomledger.checker.model.internal.CappedInputStream;
 

@@ -1,7 +1,6 @@
 package io.github.atomledger.checker.engine;
 
 import io.github.atomledger.checker.check.Severity;
-import io.github.atomledger.checker.report.ReportFormat;
 
 import java.nio.file.Path;
 import java.util.List;

@@ -141,7 +141,7 @@ public final class ConsoleSummary {
             return java.util.Optional.empty();
         }
         return java.util.Optional.of("  example " + best.id() + " carbons: "
-                + String.join("; ", io.github.atomledger.checker.annotate.CarbonMapText.format(best.mapping().carbons())));
+                + String.join("; ", io.github.atomledger.checker.transitions.CarbonMapText.format(best.mapping().carbons())));
     }
 
     static String reactionLine(ReactionResult r, List<Finding> bad) {

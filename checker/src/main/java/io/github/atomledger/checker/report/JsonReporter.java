@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.report;
 
+import io.github.atomledger.checker.engine.ReportFormat;
 import io.github.atomledger.atommapper.formula.Rational;
 import io.github.atomledger.atommapper.mapping.AtomRef;
 import io.github.atomledger.atommapper.mapping.AtomTransition;

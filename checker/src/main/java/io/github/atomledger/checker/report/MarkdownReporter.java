@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.report;
 
+import io.github.atomledger.checker.engine.ReportFormat;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.engine.ModelResult;

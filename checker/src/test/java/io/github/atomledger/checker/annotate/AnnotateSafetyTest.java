@@ -1,5 +1,9 @@
 package io.github.atomledger.checker.annotate;
 
+import io.github.atomledger.checker.transitions.StoredStructure;
+import io.github.atomledger.checker.transitions.TransitionAnnotation;
+import io.github.atomledger.checker.transitions.ModelText;
+import io.github.atomledger.checker.transitions.AnnotationIndex;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 

@@ -5,7 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import io.github.atomledger.atommapper.mapping.MappingOptions;
 import io.github.atomledger.checker.annotate.AnnotationPlan;
 import io.github.atomledger.checker.annotate.ModelAnnotator;
-import io.github.atomledger.checker.report.ReportFormat;
+import io.github.atomledger.checker.engine.ReportFormat;
 import io.github.atomledger.checker.report.Reporters;
 
 import java.nio.file.Files;

@@ -5,7 +5,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.catchThrowable;
 
 import io.github.atomledger.checker.AtomLedgerException;
-import io.github.atomledger.checker.annotate.AnnotationIndex;
+import io.github.atomledger.checker.transitions.AnnotationIndex;
 
 import com.ctc.wstx.stax.WstxInputFactory;
 import com.sun.net.httpserver.HttpServer;

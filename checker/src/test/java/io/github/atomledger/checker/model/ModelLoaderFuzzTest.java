@@ -3,7 +3,7 @@ package io.github.atomledger.checker.model;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import io.github.atomledger.checker.AtomLedgerException;
-import io.github.atomledger.checker.annotate.AnnotationIndex;
+import io.github.atomledger.checker.transitions.AnnotationIndex;
 
 import com.code_intelligence.jazzer.junit.FuzzTest;
 import java.io.IOException;

@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.report;
 
+import io.github.atomledger.checker.engine.ReportFormat;
 import io.github.atomledger.checker.engine.Engine;
 import io.github.atomledger.checker.engine.RunConfig;
 import io.github.atomledger.checker.engine.RunListener;

@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.report;
 
+import io.github.atomledger.checker.engine.ReportFormat;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 

@@ -1,7 +1,7 @@
 package io.github.atomledger.checker.check.mapping;
 
 import io.github.atomledger.atommapper.mapping.AtomTransition;
-import io.github.atomledger.checker.annotate.CarbonMapText;
+import io.github.atomledger.checker.transitions.CarbonMapText;
 import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;

@@ -1,6 +1,6 @@
 package io.github.atomledger.checker.check.mapping;
 
-import io.github.atomledger.checker.annotate.TransitionAnnotation;
+import io.github.atomledger.checker.transitions.TransitionAnnotation;
 import io.github.atomledger.checker.check.structure.SpeciesStructures;
 
 import java.util.Map;

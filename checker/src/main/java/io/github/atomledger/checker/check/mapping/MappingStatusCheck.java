@@ -5,7 +5,7 @@ import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.check.balance.Deltas;
-import io.github.atomledger.checker.annotate.CarbonMapText;
+import io.github.atomledger.checker.transitions.CarbonMapText;
 import io.github.atomledger.checker.model.ReactionInfo;
 import io.github.atomledger.atommapper.formula.Rational;
 

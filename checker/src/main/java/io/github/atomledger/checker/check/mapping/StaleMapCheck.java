@@ -1,7 +1,7 @@
 package io.github.atomledger.checker.check.mapping;
 
-import io.github.atomledger.checker.annotate.StoredStructure;
-import io.github.atomledger.checker.annotate.TransitionAnnotation;
+import io.github.atomledger.checker.transitions.StoredStructure;
+import io.github.atomledger.checker.transitions.TransitionAnnotation;
 import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;

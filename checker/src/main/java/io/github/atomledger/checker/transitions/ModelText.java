@@ -1,4 +1,4 @@
-package io.github.atomledger.checker.annotate;
+package io.github.atomledger.checker.transitions;
 
 import io.github.atomledger.checker.AtomLedgerException;
 
@@ -22,11 +22,11 @@ import java.util.zip.GZIPOutputStream;
  * gzip or not, byte-order mark, the declared encoding, and a digest of the bytes as read (to
  * refuse writing over a file that changed meanwhile).
  */
-record ModelText(Path path, byte[] bytes, String text, boolean gzip, boolean bom, Charset charset, String digest) {
+public record ModelText(Path path, byte[] bytes, String text, boolean gzip, boolean bom, Charset charset, String digest) {
 
     private static final Pattern ENCODING = Pattern.compile("^<\\?xml[^>]*encoding\\s*=\\s*[\"']([A-Za-z0-9._-]+)[\"']");
 
-    static ModelText read(Path path, String display, long maxBytes) {
+    public static ModelText read(Path path, String display, long maxBytes) {
         byte[] bytes;
         try {
             if (Files.size(path) > maxBytes && !isGzip(path)) {
@@ -58,7 +58,7 @@ record ModelText(Path path, byte[] bytes, String text, boolean gzip, boolean bom
     }
 
     /** The bytes for a new text, encoded as the original was (same charset, BOM, gzip). */
-    byte[] encode(String newText) {
+    public byte[] encode(String newText) {
         byte[] body = newText.getBytes(charset);
         byte[] xml = body;
         if (bom) {
@@ -107,7 +107,7 @@ record ModelText(Path path, byte[] bytes, String text, boolean gzip, boolean bom
         }
     }
 
-    static String digest(byte[] bytes) {
+    public static String digest(byte[] bytes) {
         try {
             return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
         } catch (NoSuchAlgorithmException e) {

@@ -1,4 +1,4 @@
-package io.github.atomledger.checker.annotate;
+package io.github.atomledger.checker.transitions;
 
 import java.util.Objects;
 

@@ -1,4 +1,4 @@
-package io.github.atomledger.checker.annotate;
+package io.github.atomledger.checker.transitions;
 
 import io.github.atomledger.atommapper.mapping.AtomTransition;
 import io.github.atomledger.checker.AtomLedgerException;
@@ -20,7 +20,7 @@ import javax.xml.stream.XMLStreamReader;
 /**
  * Where each reaction sits in a model's text, and the AtomLedger annotation it carries, found by
  * one hardened StAX pass (no DTD, no entities) over the document text. The offsets let
- * {@link ModelAnnotator} patch the text in place, so that a diff shows only what was added.
+ * {@code annotate.ModelAnnotator} patch the text in place, so that a diff shows only what was added.
  *
  * <p>Offsets are character positions in the text given to {@link #scan}. Immutable once built.
  */
@@ -170,7 +170,7 @@ public final class AnnotationIndex {
     }
 
     /** The offset just after the '>' that ends the tag starting at {@code start}, quotes respected. */
-    static int tagEnd(String text, int start) {
+    public static int tagEnd(String text, int start) {
         char quote = 0;
         for (int i = start; i < text.length(); i++) {
             char c = text.charAt(i);

@@ -1,4 +1,4 @@
-package io.github.atomledger.checker.report;
+package io.github.atomledger.checker.engine;
 
 import java.util.Arrays;
 import java.util.EnumSet;

@@ -1,4 +1,4 @@
-package io.github.atomledger.checker.annotate;
+package io.github.atomledger.checker.transitions;
 
 import io.github.atomledger.atommapper.mapping.AtomRef;
 import io.github.atomledger.atommapper.mapping.AtomTransition;

@@ -1,4 +1,4 @@
-package io.github.atomledger.checker.annotate;
+package io.github.atomledger.checker.transitions;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
