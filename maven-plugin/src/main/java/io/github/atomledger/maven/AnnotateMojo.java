@@ -13,8 +13,12 @@ import java.io.File;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
+import io.github.atomledger.checker.Wording;
+
+import org.apache.maven.execution.MavenSession;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;
+import org.apache.maven.plugin.descriptor.PluginDescriptor;
 import org.apache.maven.plugins.annotations.Mojo;
 import org.apache.maven.plugins.annotations.Parameter;
 
@@ -31,48 +35,58 @@ import org.apache.maven.plugins.annotations.Parameter;
 @Mojo(name = "annotate", threadSafe = true, requiresProject = false)
 public final class AnnotateMojo extends AbstractMojo {
 
-    /** Model files or glob patterns (as for {@code check}). Default {@code models/**.{xml,xml.gz}}. */
+    /** Model files or glob patterns, as for {@code check}. Default {@code models/**.{xml,xml.gz}}. */
     @Parameter(property = "atomledger.models")
     private List<String> models;
 
-    /** Skips the goal. Default {@code false}. */
+    /** Skips the goal. */
     @Parameter(property = "atomledger.skip", defaultValue = "false")
     private boolean skip;
 
-    /** Reports what would change without writing anything. Default {@code false}. */
+    /** Reports what would change without writing anything. */
     @Parameter(property = "atomledger.dryRun", defaultValue = "false")
     private boolean dryRun;
 
-    /** Replaces curated ({@code origin="curated"}) maps too. Default {@code false}. */
+    /** Replaces curated ({@code origin="curated"}) maps too. */
     @Parameter(property = "atomledger.overwriteCurated", defaultValue = "false")
     private boolean overwriteCurated;
 
-    /** Species structure side table (TSV: {@code species}, {@code smiles} or {@code inchi}). */
+    /**
+     * Species structure side table (TSV: {@code species}, {@code smiles} or {@code inchi}), as for
+     * {@code check}. Needed unless the species carry identifiers.org InChI annotations; without any
+     * structure the goal fails, as nothing could be annotated.
+     */
     @Parameter(property = "atomledger.structures")
     private File structures;
 
-    /** Mapping threads; 0 means one per core. Default 0. */
+    /** Mapping threads; {@code 0} means one per core. */
     @Parameter(property = "atomledger.threads", defaultValue = "0")
-    private int threads;
+    private String threads;
 
     /** Mapping cache directory, or {@code none}. Default {@code ~/.cache/atomledger/maps}. */
     @Parameter(property = "atomledger.cacheDirectory")
     private String cacheDirectory;
 
-    /** Time budget per reaction in milliseconds. Default 2000. */
+    /** Time budget per reaction, as for {@code check}: milliseconds or a number with a unit ({@code 2s}). */
     @Parameter(property = "atomledger.mappingTimeBudget", defaultValue = "2000")
-    private long mappingTimeBudget;
+    private String mappingTimeBudget;
 
-    /** Size cap per molecule in heavy atoms. Default 400. */
+    /** Size cap per molecule in heavy atoms. */
     @Parameter(property = "atomledger.maxHeavyAtoms", defaultValue = "400")
-    private int maxHeavyAtoms;
+    private String maxHeavyAtoms;
 
-    /** The most bytes of XML read from one model file, after gzip decompression. Default 1 GiB. */
-    @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1073741824")
-    private long maxModelBytes;
+    /** The most bytes of XML read from one model file, after gzip decompression, as for {@code check}. */
+    @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1g")
+    private String maxModelBytes;
 
     @Parameter(defaultValue = "${basedir}", readonly = true, required = true)
     private File baseDirectory;
+
+    @Parameter(defaultValue = "${session}", readonly = true)
+    private MavenSession session;
+
+    @Parameter(defaultValue = "${plugin}", readonly = true)
+    private PluginDescriptor plugin;
 
     @Override
     public void execute() throws MojoExecutionException {
@@ -80,20 +94,29 @@ public final class AnnotateMojo extends AbstractMojo {
             getLog().info("AtomLedger annotate skipped (atomledger.skip=true)");
             return;
         }
+        ConfigMapper.warnUnknownProperties(getLog(), session, plugin);
+        long maxBytes = ParameterValues.bytes("maxModelBytes", maxModelBytes, 1L << 30);
         RunConfig config = ConfigMapper.toConfig(baseDirectory, models, new File(baseDirectory, "target/atomledger"),
-                "none", "json", Map.of(), Map.of(), maxModelBytes)
-                .withMapping(ConfigMapper.mapping("on", baseDirectory, structures, threads, cacheDirectory,
-                        mappingTimeBudget, maxHeavyAtoms));
+                "none", "json", Map.of(), Map.of(), maxBytes)
+                .withMapping(ConfigMapper.mapping("on", baseDirectory, structures, ParameterValues.threads(threads),
+                        cacheDirectory, ParameterValues.durationMillis("mappingTimeBudget", mappingTimeBudget, 2000),
+                        ParameterValues.positive("maxHeavyAtoms", maxHeavyAtoms, 400)));
         try {
             RunResult result = new Engine().run(config, new MavenRunListener(getLog()));
-            ModelAnnotator annotator = new ModelAnnotator(overwriteCurated, dryRun, maxModelBytes);
+            if (result.models().stream().allMatch(m -> m.mapping().structures().bySpecies().isEmpty())) {
+                throw new MojoExecutionException("AtomLedger annotate: no species has a structure, so nothing can be"
+                        + " annotated. Set atomledger.structures to a species structure table (TSV with the columns"
+                        + " species and smiles or inchi), for example -Datomledger.structures=structures.tsv, or add"
+                        + " identifiers.org InChI annotations to the species.");
+            }
+            ModelAnnotator annotator = new ModelAnnotator(overwriteCurated, dryRun, maxBytes);
             for (ModelResult m : result.models()) {
                 ModelAnnotator.Outcome out = annotator.annotate(config.baseDirectory().resolve(m.file()), m.file(),
                         AnnotationPlan.of(m));
                 getLog().info(summary(m, out));
             }
         } catch (AtomLedgerException e) {
-            throw new MojoExecutionException(e.getMessage(), e);
+            throw ConfigMapper.failure(e.getMessage(), e);
         }
     }
 
@@ -108,7 +131,7 @@ public final class AnnotateMojo extends AbstractMojo {
                 + (dryRun ? "would replace " : "replaced ") + counts.getOrDefault(ModelAnnotator.Action.REPLACED, 0)
                 + ", unchanged " + counts.getOrDefault(ModelAnnotator.Action.UNCHANGED, 0)
                 + ", curated kept " + counts.getOrDefault(ModelAnnotator.Action.KEPT_CURATED, 0)
-                + "; " + notWritten + " ambiguous or unproven map(s) not written"
+                + "; " + Wording.count(notWritten, "ambiguous or unproven map") + " not written"
                 + (out.written() ? "" : dryRun ? " (dry run: nothing written)" : " (file unchanged)");
     }
 }

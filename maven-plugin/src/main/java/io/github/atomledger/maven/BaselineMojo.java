@@ -18,8 +18,13 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.util.List;
 import java.util.Map;
+import io.github.atomledger.checker.Wording;
+import io.github.atomledger.checker.engine.SeverityPolicy;
+
+import org.apache.maven.execution.MavenSession;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;
+import org.apache.maven.plugin.descriptor.PluginDescriptor;
 import org.apache.maven.plugins.annotations.Mojo;
 import org.apache.maven.plugins.annotations.Parameter;
 
@@ -39,13 +44,13 @@ public final class BaselineMojo extends AbstractMojo {
     @Parameter(property = "atomledger.models")
     private List<String> models;
 
-    /** Skips the goal. Default {@code false}. */
+    /** Skips the goal. */
     @Parameter(property = "atomledger.skip", defaultValue = "false")
     private boolean skip;
 
     /**
      * The lowest severity recorded in the baseline: {@code error}, {@code warning} or {@code info}
-     * ({@code none} records every finding). Default {@code error}, the same as {@code check}.
+     * ({@code none} records every finding); the same default as {@code check}.
      */
     @Parameter(property = "atomledger.failOnSeverity", defaultValue = "error")
     private String failOnSeverity;
@@ -58,6 +63,10 @@ public final class BaselineMojo extends AbstractMojo {
     @Parameter
     private Map<String, String> classSeverities;
 
+    /** Severity overrides in one line, as for {@code check}: {@code -Datomledger.severity=structure.protonation=off}. */
+    @Parameter(property = "atomledger.severity")
+    private String severity;
+
     /**
      * The baseline file to write. Default {@code models/atomledger-baseline.tsv}. Example:
      * {@code -Datomledger.baseline=models/baseline.tsv}.
@@ -66,8 +75,8 @@ public final class BaselineMojo extends AbstractMojo {
     private File baseline;
 
     /**
-     * Who accepts the new entries, written in their {@code acceptedBy} column. Default: the
-     * {@code user.name} of the JVM. Example: {@code -Datomledger.baselineOwner=mkrause}.
+     * Who accepts the new entries, written in their {@code acceptedBy} column (the default is the
+     * JVM's {@code user.name}). Example: {@code -Datomledger.baselineOwner=mkrause}.
      */
     @Parameter(property = "atomledger.baselineOwner", defaultValue = "${user.name}")
     private String baselineOwner;
@@ -76,9 +85,9 @@ public final class BaselineMojo extends AbstractMojo {
     @Parameter(property = "atomledger.previousModels")
     private File previousModels;
 
-    /** The most bytes of XML read from one model file, after gzip decompression. Default 1 GiB. */
-    @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1073741824")
-    private long maxModelBytes;
+    /** The most bytes of XML read from one model file, after gzip decompression, as for {@code check}. */
+    @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1g")
+    private String maxModelBytes;
 
     @Parameter(defaultValue = "${project.build.directory}", readonly = true)
     private File buildDirectory;
@@ -87,15 +96,24 @@ public final class BaselineMojo extends AbstractMojo {
     @Parameter(defaultValue = "${basedir}", readonly = true, required = true)
     private File baseDirectory;
 
+    @Parameter(defaultValue = "${session}", readonly = true)
+    private MavenSession session;
+
+    @Parameter(defaultValue = "${plugin}", readonly = true)
+    private PluginDescriptor plugin;
+
     @Override
     public void execute() throws MojoExecutionException {
         if (skip) {
             getLog().info("AtomLedger baseline skipped (atomledger.skip=true)");
             return;
         }
+        ConfigMapper.warnUnknownProperties(getLog(), session, plugin);
+        SeverityPolicy.Overrides levels = ConfigMapper.severityOverrides(severities, classSeverities, severity);
+        long maxBytes = ParameterValues.bytes("maxModelBytes", maxModelBytes, 1L << 30);
         RunConfig config = ConfigMapper.toConfig(baseDirectory, models,
                 ConfigMapper.reportDirectory(null, buildDirectory, baseDirectory), failOnSeverity, "json",
-                severities, classSeverities, maxModelBytes);
+                levels.byRule(), levels.byClass(), maxBytes);
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, FailScope.FINDINGS.label());
         String display = ConfigMapper.display(config.baseDirectory(), gate.baseline());
         try {
@@ -103,7 +121,7 @@ public final class BaselineMojo extends AbstractMojo {
             MavenRunListener listener = new MavenRunListener(getLog());
             RunResult result = engine.run(config, listener);
             if (gate.previousModels() != null) {
-                result = Gate.standard(engine, maxModelBytes).withReleaseDiff(result, gate.previousModels(), listener);
+                result = Gate.standard(engine, maxBytes).withReleaseDiff(result, gate.previousModels(), listener);
             }
             Baseline existing = Files.exists(gate.baseline()) ? Baseline.read(gate.baseline(), display) : Baseline.empty();
             Severity threshold = config.failOn() == null ? Severity.INFO : config.failOn();
@@ -111,18 +129,18 @@ public final class BaselineMojo extends AbstractMojo {
                     result.models().stream().map(ModelResult::file).toList(), threshold,
                     baselineOwner == null || baselineOwner.isBlank() ? "unknown" : baselineOwner);
             update.baseline().write(gate.baseline());
-            getLog().info("baseline " + display + ": " + update.baseline().entries().size() + " entries ("
-                    + update.kept().size() + " kept, " + update.added().size() + " added, "
+            getLog().info("baseline " + display + ": " + Wording.count(update.baseline().entries().size(), "entry")
+                    + " (" + update.kept().size() + " kept, " + update.added().size() + " added, "
                     + update.removed().size() + " removed)");
             for (BaselineEntry e : update.added()) {
                 getLog().warn("new baseline entry needs a reason: " + e.modelFile() + " " + e.ruleId() + " " + e.elementId());
             }
         } catch (AtomLedgerException e) {
-            throw new MojoExecutionException(e.getMessage(), e);
+            throw ConfigMapper.failure(e.getMessage(), e);
         } catch (IOException e) {
-            throw new MojoExecutionException("AtomLedger could not write the baseline " + display + ": " + e.getMessage(), e);
+            throw ConfigMapper.failure("AtomLedger could not write the baseline " + display + ": " + e.getMessage(), e);
         } catch (IllegalArgumentException e) {
-            throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
+            throw ConfigMapper.failure("AtomLedger configuration: " + e.getMessage(), e);
         }
     }
 }

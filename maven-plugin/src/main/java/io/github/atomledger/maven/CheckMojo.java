@@ -4,6 +4,7 @@ import io.github.atomledger.checker.AtomLedgerException;
 import io.github.atomledger.checker.engine.Engine;
 import io.github.atomledger.checker.engine.RunConfig;
 import io.github.atomledger.checker.engine.RunResult;
+import io.github.atomledger.checker.engine.SeverityPolicy;
 import io.github.atomledger.checker.gate.Gate;
 import io.github.atomledger.checker.gate.GateConfig;
 import io.github.atomledger.checker.report.ConsoleSummary;
@@ -14,17 +15,25 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import org.apache.maven.execution.MavenSession;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;
 import org.apache.maven.plugin.MojoFailureException;
+import org.apache.maven.plugin.descriptor.PluginDescriptor;
 import org.apache.maven.plugins.annotations.LifecyclePhase;
 import org.apache.maven.plugins.annotations.Mojo;
 import org.apache.maven.plugins.annotations.Parameter;
 
 /**
- * Checks SBML models: element and charge balance of every reaction, formulas and charges, and
- * model integrity. Writes reports and fails the build on findings at or above
- * {@code failOnSeverity}. Read-only: never writes a model file.
+ * Checks SBML models and fails the build on what is wrong: element and charge balance of every
+ * reaction (exact arithmetic; exchange, demand and sink reactions exempt, biomass reported at
+ * info), formulas and charges, model integrity and stoichiometric consistency. With species
+ * structures ({@code structures}, or {@code mapping=on} for InChIs in the model) it also maps the
+ * atoms of every reaction, checks declared formulas against the structures and validates curated
+ * atom transitions. Writes the reports (HTML, JSON, JUnit XML, SARIF, Markdown), prints what fails
+ * at {@code [ERROR]} and warnings at {@code [WARNING]}, and fails the build on findings at or
+ * above {@code failOnSeverity} that the baseline does not accept. Read-only: never writes a model
+ * file.
  *
  * <p>Works without a pom: {@code mvn io.github.atomledger:atomledger-maven-plugin:VERSION:check
  * -Datomledger.models=models/my-model.xml}.
@@ -40,20 +49,20 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.models")
     private List<String> models;
 
-    /** Skips the goal. Default {@code false}. Example: {@code -Datomledger.skip}. */
+    /** Skips the goal. Example: {@code -Datomledger.skip}. */
     @Parameter(property = "atomledger.skip", defaultValue = "false")
     private boolean skip;
 
     /**
      * The lowest severity that fails the build: {@code error}, {@code warning}, {@code info}, or
-     * {@code none} to only report. Default {@code error}.
+     * {@code none} to only report.
      */
     @Parameter(property = "atomledger.failOnSeverity", defaultValue = "error")
     private String failOnSeverity;
 
     /**
-     * Where reports are written. Default {@code ${project.build.directory}/atomledger}, which is
-     * {@code target/atomledger} in the working directory when there is no pom.
+     * Where reports are written. Default: {@code atomledger} in the build directory, which is
+     * {@code target/atomledger} below the project directory (also without a pom).
      */
     @Parameter(property = "atomledger.reportDirectory")
     private File reportDirectory;
@@ -63,15 +72,15 @@ public final class CheckMojo extends AbstractMojo {
 
     /**
      * Report formats, a comma list of {@code json}, {@code html}, {@code junit}, {@code sarif},
-     * {@code markdown}, or {@code all}. Default {@code all}. Example: {@code -Datomledger.formats=json,sarif}.
+     * {@code markdown}, or {@code all}. Example: {@code -Datomledger.formats=json,sarif}.
      */
     @Parameter(property = "atomledger.formats", defaultValue = "all")
     private String formats;
 
     /**
-     * Severity per rule id: a severity or {@code off}. Example:
+     * Severity per rule id, in the pom: a severity or {@code off}. Example:
      * {@code <severities><balance.charge>warning</balance.charge></severities>}. Unknown rule ids
-     * stop the build with the list of known ones.
+     * stop the build, naming the nearest known one. On the command line use {@code severity}.
      */
     @Parameter
     private Map<String, String> severities;
@@ -83,6 +92,17 @@ public final class CheckMojo extends AbstractMojo {
      */
     @Parameter
     private Map<String, String> classSeverities;
+
+    /**
+     * Severity overrides in one line, for the command line: entries {@code key=level} separated by
+     * commas, where the key is a rule id, an area with {@code .*} (every rule of the area; a named
+     * rule wins over it) or {@code @} and a reaction class, and the level is {@code error},
+     * {@code warning}, {@code info} or {@code off}. Laid over {@code severities} and
+     * {@code classSeverities}. Example:
+     * {@code -Datomledger.severity=structure.protonation=off,mapping.*=info,@biomass=off}.
+     */
+    @Parameter(property = "atomledger.severity")
+    private String severity;
 
     /**
      * The baseline of accepted findings (see {@code docs/gating.md}): findings listed there with a
@@ -105,19 +125,22 @@ public final class CheckMojo extends AbstractMojo {
     /**
      * Which findings may fail the build: {@code findings} (every finding at or above
      * {@code failOnSeverity} not accepted in the baseline) or {@code regressions} (only the release
-     * diff's findings; needs {@code previousModels}). Default {@code findings}.
+     * diff's findings; needs {@code previousModels}).
      */
     @Parameter(property = "atomledger.failOn", defaultValue = "findings")
     private String failOn;
 
-    /** The most bytes of XML read from one model file, after gzip decompression. Default 1 GiB. */
-    @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1073741824")
-    private long maxModelBytes;
+    /**
+     * The most bytes of XML read from one model file, after gzip decompression: a number of bytes
+     * or a number with {@code k}, {@code m} or {@code g} (1 GiB = {@code 1g}).
+     */
+    @Parameter(property = "atomledger.maxModelBytes", defaultValue = "1g")
+    private String maxModelBytes;
 
     /**
-     * Species structure side table: a TSV file with a header and the columns {@code species} and
-     * {@code smiles} or {@code inchi}. Setting it turns atom mapping on (see {@code mapping}).
-     * Example: {@code -Datomledger.structures=structures.tsv}.
+     * Species structure side table, which turns atom mapping on: a TSV file with a header and the
+     * columns {@code species} and {@code smiles} or {@code inchi}. Default: none. Example:
+     * {@code -Datomledger.structures=structures.tsv}.
      */
     @Parameter(property = "atomledger.structures")
     private File structures;
@@ -125,14 +148,13 @@ public final class CheckMojo extends AbstractMojo {
     /**
      * Atom mapping: {@code auto} (map when {@code structures} is set), {@code on} (also with
      * InChIs from MIRIAM annotations or structures stored by {@code annotate}), or {@code off}.
-     * Default {@code auto}.
      */
     @Parameter(property = "atomledger.mapping", defaultValue = "auto")
     private String mapping;
 
-    /** Mapping threads; 0 means one per core. Default 0. */
+    /** Mapping threads; {@code 0} means one per core. */
     @Parameter(property = "atomledger.threads", defaultValue = "0")
-    private int threads;
+    private String threads;
 
     /**
      * Where mapping results are cached between runs (they survive {@code mvn clean}); {@code none}
@@ -141,17 +163,26 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.cacheDirectory")
     private String cacheDirectory;
 
-    /** Time budget per reaction for the exact mapper, in milliseconds. Default 2000. */
+    /**
+     * Time budget per reaction for the exact mapper: milliseconds ({@code 2000}) or a number with
+     * a unit ({@code 500ms}, {@code 2s}, {@code 1m}).
+     */
     @Parameter(property = "atomledger.mappingTimeBudget", defaultValue = "2000")
-    private long mappingTimeBudget;
+    private String mappingTimeBudget;
 
-    /** Size cap per molecule for the mapper, in heavy (non-hydrogen) atoms. Default 400. */
+    /** Size cap per molecule for the mapper, in heavy (non-hydrogen) atoms. */
     @Parameter(property = "atomledger.maxHeavyAtoms", defaultValue = "400")
-    private int maxHeavyAtoms;
+    private String maxHeavyAtoms;
 
     /** The project directory; model patterns are relative to it. */
     @Parameter(defaultValue = "${basedir}", readonly = true, required = true)
     private File baseDirectory;
+
+    @Parameter(defaultValue = "${session}", readonly = true)
+    private MavenSession session;
+
+    @Parameter(defaultValue = "${plugin}", readonly = true)
+    private PluginDescriptor plugin;
 
     @Override
     public void execute() throws MojoExecutionException, MojoFailureException {
@@ -159,11 +190,14 @@ public final class CheckMojo extends AbstractMojo {
             getLog().info("AtomLedger check skipped (atomledger.skip=true)");
             return;
         }
+        ConfigMapper.warnUnknownProperties(getLog(), session, plugin);
+        SeverityPolicy.Overrides levels = ConfigMapper.severityOverrides(severities, classSeverities, severity);
         RunConfig config = ConfigMapper.toConfig(baseDirectory, models,
                 ConfigMapper.reportDirectory(reportDirectory, buildDirectory, baseDirectory), failOnSeverity, formats,
-                severities, classSeverities, maxModelBytes)
-                .withMapping(ConfigMapper.mapping(mapping, baseDirectory, structures, threads, cacheDirectory,
-                        mappingTimeBudget, maxHeavyAtoms));
+                levels.byRule(), levels.byClass(), ParameterValues.bytes("maxModelBytes", maxModelBytes, 1L << 30))
+                .withMapping(ConfigMapper.mapping(mapping, baseDirectory, structures, ParameterValues.threads(threads),
+                        cacheDirectory, ParameterValues.durationMillis("mappingTimeBudget", mappingTimeBudget, 2000),
+                        ParameterValues.positive("maxHeavyAtoms", maxHeavyAtoms, 400)));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
         List<Path> written;
@@ -173,11 +207,11 @@ public final class CheckMojo extends AbstractMojo {
             result = Gate.standard(engine, config.maxModelBytes()).apply(engine.run(config, listener), gate, listener);
             written = Reporters.forFormats(config.formats()).write(result, config.reportDirectory());
         } catch (AtomLedgerException e) {
-            throw new MojoExecutionException(e.getMessage(), e);
+            throw ConfigMapper.failure(e.getMessage(), e);
         } catch (IOException e) {
-            throw new MojoExecutionException("AtomLedger could not write its reports: " + e.getMessage(), e);
+            throw ConfigMapper.failure("AtomLedger could not write its reports: " + e.getMessage(), e);
         } catch (IllegalArgumentException e) {
-            throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
+            throw ConfigMapper.failure("AtomLedger configuration: " + e.getMessage(), e);
         }
         boolean colour = ConsoleSummary.colourWanted(System.getenv(), System.console() != null);
         for (String line : ConsoleSummary.lines(result, colour)) {

@@ -23,7 +23,10 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
+import org.apache.maven.execution.MavenSession;
 import org.apache.maven.plugin.MojoExecutionException;
+import org.apache.maven.plugin.descriptor.PluginDescriptor;
+import org.apache.maven.plugin.logging.Log;
 
 /** Turns Mojo parameters into a {@link RunConfig}; shared by the goals. */
 final class ConfigMapper {
@@ -55,8 +58,40 @@ final class ConfigMapper {
             return new RunConfig(base, patterns, reportDirectory.toPath().toAbsolutePath().normalize(),
                     failOn(failOnSeverity), fmt, policy, maxModelBytes, MappingConfig.OFF);
         } catch (IllegalArgumentException e) {
-            throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
+            throw ConfigMapper.failure("AtomLedger configuration: " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * The pom's {@code severities} and {@code classSeverities} with the one-line
+     * {@code atomledger.severity} laid over them (see {@link SeverityPolicy#parse}).
+     */
+    static SeverityPolicy.Overrides severityOverrides(Map<String, String> severities, Map<String, String> classSeverities,
+                                                      String line) throws MojoExecutionException {
+        try {
+            return SeverityPolicy.parse(line, "atomledger.severity", knownRuleIds()).over(severities, classSeverities);
+        } catch (IllegalArgumentException e) {
+            throw ConfigMapper.failure("AtomLedger configuration: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * The exception that stops the build with this message. The cause is kept as a suppressed
+     * exception, not as the cause: Maven's one-line error appends every cause's own message, and a
+     * library's message (with its Java class names) would follow ours.
+     */
+    static MojoExecutionException failure(String message, Throwable cause) {
+        MojoExecutionException e = new MojoExecutionException(message);
+        e.addSuppressed(cause);
+        return e;
+    }
+
+    /** Logs a warning for every {@code atomledger.*} user property no goal of the plugin reads. */
+    static void warnUnknownProperties(Log log, MavenSession session, PluginDescriptor plugin) {
+        if (session == null) {
+            return;
+        }
+        UnknownProperties.warnings(session.getUserProperties(), UnknownProperties.known(plugin)).forEach(log::warn);
     }
 
     /** Every rule id a severity may be set for: the checks' and the release gate's. */
@@ -78,7 +113,7 @@ final class ConfigMapper {
             Path previous = previousModels == null ? null : base.resolve(previousModels.toPath()).normalize();
             return new GateConfig(file.normalize(), baseline != null, previous, FailScope.parse(failOn));
         } catch (IllegalArgumentException e) {
-            throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
+            throw ConfigMapper.failure("AtomLedger configuration: " + e.getMessage(), e);
         }
     }
 

@@ -41,11 +41,33 @@ class ConfigMapperTest {
     void unknownRuleIdStopsTheBuildWithTheListOfKnownOnesIncludingTheGateRules() {
         assertThatThrownBy(() -> config(Map.of("balance.chrage", "off"), null))
                 .isInstanceOf(MojoExecutionException.class)
-                .hasMessageStartingWith("AtomLedger configuration: unknown rule id 'balance.chrage' in severities; known rule ids: ")
+                .hasMessageStartingWith("AtomLedger configuration: unknown rule id 'balance.chrage' in severities;"
+                        + " did you mean 'balance.charge'? Known rule ids: ")
                 .hasMessageContaining("balance.charge, balance.class-mismatch")
                 .hasMessageContaining("model.baseline-stale")
                 .hasMessageContaining("balance.regression")
                 .hasMessageContaining("mapping.transitions-changed");
+    }
+
+    // Issue #13: the one-line severity property over the pom's maps.
+    @Test
+    void severityPropertyIsLaidOverThePomsMaps() throws Exception {
+        var o = ConfigMapper.severityOverrides(Map.of("balance.charge", "warning"), Map.of("sink", "off"),
+                "balance.charge=info,structure.*=off,@biomass=off");
+        assertThat(o.byRule()).containsEntry("balance.charge", "info").containsEntry("structure.protonation", "off")
+                .containsEntry("structure.formula-mismatch", "off");
+        assertThat(o.byClass()).containsEntry("sink", "off").containsEntry("biomass", "off");
+        assertThatThrownBy(() -> ConfigMapper.severityOverrides(null, null, "balance.chrage=off"))
+                .hasMessageStartingWith("AtomLedger configuration: atomledger.severity: unknown rule id 'balance.chrage';"
+                        + " did you mean 'balance.charge'?");
+    }
+
+    @Test
+    void failureKeepsTheCauseOutOfMavensOneLineMessage() {
+        MojoExecutionException e = ConfigMapper.failure("m.xml:3:1: malformed XML: x", new IllegalStateException("com.x.Y: x"));
+        assertThat(e.getCause()).isNull();
+        assertThat(e.getSuppressed()).hasSize(1);
+        assertThat(e.getMessage()).isEqualTo("m.xml:3:1: malformed XML: x");
     }
 
     @Test

@@ -92,7 +92,7 @@ public final class Engine {
             try {
                 found = check.check(context);
             } catch (RuntimeException e) {
-                throw new AtomLedgerException(model.file() + ": check " + check.ruleId() + " failed: " + e, e);
+                throw new AtomLedgerException(model.file() + ": check " + check.ruleId() + " failed: " + AtomLedgerException.reason(e), e);
             }
             for (Finding f : found) {
                 ReactionBalance b = balances.get(f.elementId());

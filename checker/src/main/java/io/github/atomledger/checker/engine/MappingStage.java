@@ -166,7 +166,7 @@ final class MappingStage {
             Thread.currentThread().interrupt();
             throw new AtomLedgerException(file + ": mapping was interrupted", e);
         } catch (ExecutionException e) {
-            throw new AtomLedgerException(file + ": the atom mapper failed: " + e.getCause(), e.getCause());
+            throw new AtomLedgerException(file + ": the atom mapper failed: " + AtomLedgerException.reason(e.getCause()), e.getCause());
         } finally {
             pool.shutdownNow();
         }

@@ -34,7 +34,8 @@ final class ModelLocator {
             if (!isGlob(pattern)) {
                 Path p = base.resolve(pattern).normalize();
                 if (!Files.isRegularFile(p)) {
-                    throw new AtomLedgerException(pattern + ": model file not found (looked in " + base + ")");
+                    throw new AtomLedgerException(pattern + ": model file not found (looked in " + base + ")"
+                            + sibling(p, pattern));
                 }
                 found.add(relative(base, p));
                 continue;
@@ -48,6 +49,18 @@ final class ModelLocator {
         List<Path> out = new ArrayList<>();
         found.forEach(rel -> out.add(base.resolve(rel).normalize()));
         return out;
+    }
+
+    /** "; did you mean x.xml.gz?" when a compressed (or uncompressed) twin of the missing file exists. */
+    private static String sibling(Path missing, String pattern) {
+        String name = missing.getFileName() == null ? "" : missing.getFileName().toString();
+        String twin = name.endsWith(".gz") ? name.substring(0, name.length() - 3) : name + ".gz";
+        Path other = missing.resolveSibling(twin);
+        if (!twin.isEmpty() && Files.isRegularFile(other)) {
+            String shown = pattern.endsWith(".gz") ? pattern.substring(0, pattern.length() - 3) : pattern + ".gz";
+            return "; " + shown + " exists: did you mean it?";
+        }
+        return "";
     }
 
     static String relative(Path base, Path file) {

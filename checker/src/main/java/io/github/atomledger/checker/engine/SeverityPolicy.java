@@ -7,6 +7,9 @@ import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.check.balance.ReactionClass;
 
+import io.github.atomledger.checker.NearestName;
+
+import java.util.Arrays;
 import java.util.Collections;
 import java.util.EnumMap;
 import java.util.List;
@@ -77,14 +80,112 @@ public final class SeverityPolicy {
         byRule.forEach((rule, value) -> {
             String r = rule.strip();
             if (!known.contains(r)) {
-                throw new IllegalArgumentException("unknown rule id '" + rule + "' in severities; known rule ids: "
-                        + String.join(", ", known));
+                throw new IllegalArgumentException("unknown rule id '" + rule + "' in severities"
+                        + NearestName.sentence(r, known) + " Known rule ids: " + String.join(", ", known));
             }
             rules.put(r, validValue(value, "severity of rule " + r));
         });
         Map<ReactionClass, String> classes = new EnumMap<>(ReactionClass.class);
-        byClass.forEach((cls, value) -> classes.put(ReactionClass.parse(cls), validValue(value, "severity of class " + cls)));
+        byClass.forEach((cls, value) -> classes.put(reactionClass(cls), validValue(value, "severity of class " + cls)));
         return new SeverityPolicy(rules, classes);
+    }
+
+    private static ReactionClass reactionClass(String label) {
+        try {
+            return ReactionClass.parse(label);
+        } catch (IllegalArgumentException e) {
+            List<String> labels = Arrays.stream(ReactionClass.values()).map(ReactionClass::label).toList();
+            throw new IllegalArgumentException("unknown reaction class '" + label + "'"
+                    + NearestName.sentence(label, labels) + " Known classes: " + String.join(", ", labels));
+        }
+    }
+
+    /**
+     * Severity overrides written in one line, the form of {@code -Datomledger.severity}: entries
+     * separated by commas, semicolons or line breaks, each {@code key=level} with {@code level}
+     * one of {@code error}, {@code warning}, {@code info}, {@code off}, and {@code key} one of
+     * <ul>
+     *   <li>a rule id ({@code structure.protonation=off});</li>
+     *   <li>an area and {@code .*} ({@code mapping.*=info}): every known rule of that area;
+     *       an entry naming one rule of the area wins over it, wherever it stands;</li>
+     *   <li>{@code @} and a reaction class ({@code @biomass=off}): {@code balance.*} findings on
+     *       reactions of that class, as {@code classSeverities}.</li>
+     * </ul>
+     * Later entries for the same key win. Blank text gives no overrides.
+     *
+     * @param text  the setting
+     * @param where how messages name the setting ("atomledger.severity")
+     * @param knownRuleIds every rule id a severity may be set for
+     * @throws IllegalArgumentException naming the entry and what is wrong, with the nearest known
+     *         rule id, area or class when the key is misspelt
+     */
+    public static Overrides parse(String text, String where, Set<String> knownRules) {
+        Set<String> knownRuleIds = new TreeSet<>(knownRules);
+        Map<String, String> areaRules = new TreeMap<>();
+        Map<String, String> rules = new TreeMap<>();
+        Map<String, String> classes = new TreeMap<>();
+        if (text == null || text.isBlank()) {
+            return new Overrides(rules, classes);
+        }
+        Set<String> areas = new TreeSet<>();
+        knownRuleIds.forEach(r -> areas.add(r.substring(0, Math.max(0, r.indexOf('.')))));
+        List<String> classLabels = Arrays.stream(ReactionClass.values()).map(ReactionClass::label).toList();
+        for (String raw : text.split("[,;\\n\\r]")) {
+            String entry = raw.strip();
+            if (entry.isEmpty()) {
+                continue;
+            }
+            int eq = entry.indexOf('=');
+            if (eq < 0) {
+                throw new IllegalArgumentException(where + ": '" + entry + "' is not of the form key=level (for example "
+                        + "structure.protonation=off, mapping.*=info or @biomass=off)");
+            }
+            String key = entry.substring(0, eq).strip();
+            String level = validValue(entry.substring(eq + 1), where + ": the level of '" + key + "'");
+            if (key.startsWith("@")) {
+                String cls = key.substring(1).strip();
+                if (!classLabels.contains(cls.toLowerCase(java.util.Locale.ROOT))) {
+                    throw new IllegalArgumentException(where + ": unknown reaction class '" + cls + "'"
+                            + NearestName.sentence(cls, classLabels) + " Known classes: " + String.join(", ", classLabels));
+                }
+                classes.put(cls.toLowerCase(java.util.Locale.ROOT), level);
+            } else if (key.endsWith(".*")) {
+                String area = key.substring(0, key.length() - 2);
+                if (!areas.contains(area)) {
+                    throw new IllegalArgumentException(where + ": no rule belongs to the area '" + area + "'"
+                            + NearestName.sentence(area, areas) + " Areas: " + String.join(", ", areas));
+                }
+                knownRuleIds.stream().filter(r -> r.startsWith(area + ".")).forEach(r -> areaRules.put(r, level));
+            } else if (knownRuleIds.contains(key)) {
+                rules.put(key, level);
+            } else {
+                throw new IllegalArgumentException(where + ": unknown rule id '" + key + "'"
+                        + NearestName.sentence(key, knownRuleIds) + " Known rule ids: " + String.join(", ", knownRuleIds));
+            }
+        }
+        areaRules.putAll(rules);
+        return new Overrides(areaRules, classes);
+    }
+
+    /**
+     * Overrides parsed from one line ({@link #parse}): rule id to level and reaction class label
+     * to level, both sorted; levels are labels or {@code off}.
+     */
+    public record Overrides(Map<String, String> byRule, Map<String, String> byClass) {
+
+        public Overrides {
+            byRule = Collections.unmodifiableMap(new TreeMap<>(byRule));
+            byClass = Collections.unmodifiableMap(new TreeMap<>(byClass));
+        }
+
+        /** These overrides laid over {@code rules} and {@code classes} (for example a pom's): ours win. */
+        public Overrides over(Map<String, String> rules, Map<String, String> classes) {
+            Map<String, String> r = new TreeMap<>(rules == null ? Map.of() : rules);
+            r.putAll(byRule);
+            Map<String, String> c = new TreeMap<>(classes == null ? Map.of() : classes);
+            c.putAll(byClass);
+            return new Overrides(r, c);
+        }
     }
 
     private static String validValue(String value, String what) {
@@ -95,7 +196,9 @@ public final class SeverityPolicy {
         try {
             return Severity.parse(v).label();
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("bad " + what + ": '" + value + "'; allowed: info, warning, error, off");
+            throw new IllegalArgumentException((what.startsWith("atomledger") ? what : "bad " + what) + ": '"
+                    + (value == null ? "" : value.strip()) + "' is not a level" + NearestName.sentence(v, List.of("error", "warning", "info", "off"))
+                    + " Allowed: error, warning, info, off");
         }
     }
 

@@ -90,7 +90,7 @@ public final class ModelLoader {
                 if (c instanceof AtomLedgerException a) {
                     throw a;
                 }
-                throw new AtomLedgerException(displayPath + ": the SBML reader failed: " + e, e);
+                throw new AtomLedgerException(displayPath + ": the SBML reader failed: " + AtomLedgerException.reason(e), e);
             }
             if (!recorder.rootSeen()) {
                 throw new AtomLedgerException(displayPath + ": the file contains no XML element");

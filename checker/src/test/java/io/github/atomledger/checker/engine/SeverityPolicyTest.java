@@ -66,7 +66,8 @@ class SeverityPolicyTest {
         assertThat(known).startsWith("balance.charge, ").contains("model.duplicate-id");
         assertThatThrownBy(() -> policy(Map.of("balance.chrage", "warning"), Map.of()))
                 .isInstanceOf(IllegalArgumentException.class)
-                .hasMessage("unknown rule id 'balance.chrage' in severities; known rule ids: " + known);
+                .hasMessage("unknown rule id 'balance.chrage' in severities; did you mean 'balance.charge'? Known rule ids: "
+                        + known);
     }
 
     @Test
@@ -79,9 +80,49 @@ class SeverityPolicyTest {
     @Test
     void badValuesAndClassesAreRejectedWithTheAllowedOnes() {
         assertThatThrownBy(() -> policy(Map.of("balance.charge", "fatal"), Map.of()))
-                .hasMessage("bad severity of rule balance.charge: 'fatal'; allowed: info, warning, error, off");
+                .hasMessage("bad severity of rule balance.charge: 'fatal' is not a level. Allowed: error, warning, info, off");
         assertThatThrownBy(() -> policy(Map.of(), Map.of("growth", "off")))
-                .hasMessage("unknown reaction class 'growth'; allowed: internal, transport, atp-maintenance, exchange,"
+                .hasMessage("unknown reaction class 'growth'. Known classes: internal, transport, atp-maintenance, exchange,"
                         + " demand, sink, biomass, pseudo");
+    }
+
+    // Issue #13: severities from the command line, in one line.
+    @Test
+    void oneLineSettingSetsRulesAreasAndClasses() {
+        Set<String> known = Set.of("balance.charge", "balance.elements", "mapping.ambiguous", "mapping.stale",
+                "structure.protonation");
+        SeverityPolicy.Overrides o = SeverityPolicy.parse(" structure.protonation=off; mapping.*=info,"
+                + " mapping.stale=error\n@Biomass = OFF ", "atomledger.severity", known);
+        assertThat(o.byRule()).containsExactly(Map.entry("mapping.ambiguous", "info"), Map.entry("mapping.stale", "error"),
+                Map.entry("structure.protonation", "off"));
+        assertThat(o.byClass()).containsExactly(Map.entry("biomass", "off"));
+        assertThat(SeverityPolicy.parse("  ", "x", known).byRule()).isEmpty();
+    }
+
+    @Test
+    void oneLineSettingWinsOverThePomForTheSameKey() {
+        SeverityPolicy.Overrides o = SeverityPolicy.parse("balance.charge=info", "atomledger.severity",
+                Set.of("balance.charge", "balance.elements")).over(Map.of("balance.charge", "warning",
+                "balance.elements", "warning"), Map.of("sink", "off"));
+        assertThat(o.byRule()).containsExactly(Map.entry("balance.charge", "info"), Map.entry("balance.elements", "warning"));
+        assertThat(o.byClass()).containsExactly(Map.entry("sink", "off"));
+    }
+
+    @Test
+    void oneLineSettingNamesTheNearestKnownRuleAreaClassAndLevel() {
+        Set<String> known = Set.of("structure.protonation", "mapping.ambiguous");
+        assertThatThrownBy(() -> SeverityPolicy.parse("structure.protonaton=off", "atomledger.severity", known))
+                .hasMessage("atomledger.severity: unknown rule id 'structure.protonaton'; did you mean"
+                        + " 'structure.protonation'? Known rule ids: mapping.ambiguous, structure.protonation");
+        assertThatThrownBy(() -> SeverityPolicy.parse("maping.*=off", "atomledger.severity", known))
+                .hasMessage("atomledger.severity: no rule belongs to the area 'maping'; did you mean 'mapping'?"
+                        + " Areas: mapping, structure");
+        assertThatThrownBy(() -> SeverityPolicy.parse("@biomas=off", "atomledger.severity", known))
+                .hasMessageStartingWith("atomledger.severity: unknown reaction class 'biomas'; did you mean 'biomass'?");
+        assertThatThrownBy(() -> SeverityPolicy.parse("mapping.ambiguous=wraning", "atomledger.severity", known))
+                .hasMessage("atomledger.severity: the level of 'mapping.ambiguous': 'wraning' is not a level; did you"
+                        + " mean 'warning'? Allowed: error, warning, info, off");
+        assertThatThrownBy(() -> SeverityPolicy.parse("mapping.ambiguous", "atomledger.severity", known))
+                .hasMessageStartingWith("atomledger.severity: 'mapping.ambiguous' is not of the form key=level");
     }
 }

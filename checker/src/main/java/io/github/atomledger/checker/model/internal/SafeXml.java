@@ -36,6 +36,9 @@ public final class SafeXml {
         return file + ":" + loc.getLineNumber() + ":" + loc.getColumnNumber() + ": ";
     }
 
+    private static final java.util.regex.Pattern JAVA_CLASS = java.util.regex.Pattern.compile(
+            "\\b(?:[a-z][a-z0-9_]*\\.)+[A-Z][A-Za-z0-9_$]*(?:Exception|Error)\\b:?\\s*");
+
     /** Woodstox's message without its "ParseError at [row,col]" prefix, on one line. */
     public static String clean(XMLStreamException e) {
         String m = e.getMessage() == null ? e.toString() : e.getMessage();
@@ -43,6 +46,15 @@ public final class SafeXml {
         if (i >= 0) {
             m = m.substring(i + "Message: ".length());
         }
-        return m.replaceAll("\\s*\\R\\s*", " ").replaceAll("\\s*at \\[row,col.*$", "").strip();
+        m = m.replaceAll("\\s*\\R\\s*", " ").replaceAll("\\s*at \\[row,col[^\\]]*\\]: \\[[0-9,]*\\]", "");
+        // Woodstox appends the nested exception ("...: com.ctc.wstx.exc.WstxParsingException: ..."); a
+        // curator needs the sentence, not the Java class, and the sentence is already there once.
+        m = JAVA_CLASS.matcher(m).replaceAll("");
+        m = m.replaceAll("\\s*at \\[row,col.*$", "").strip();
+        int k = m.lastIndexOf(": ");
+        if (k > 0 && m.substring(k + 2).strip().equals(m.substring(0, k).strip())) {
+            m = m.substring(0, k).strip();
+        }
+        return m;
     }
 }
