@@ -3,7 +3,7 @@
 import groovy.json.JsonSlurper
 
 def report = new JsonSlurper().parse(new File(basedir, 'target/atomledger/report.json'))
-assert report.schemaVersion == '1.0'
+assert report.schemaVersion == '2.0'
 assert report.models.size() == 1
 def model = report.models[0]
 assert model.file == 'models/upper_glycolysis.xml'

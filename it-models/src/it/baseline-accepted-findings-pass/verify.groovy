@@ -3,7 +3,7 @@
 import groovy.json.JsonSlurper
 
 def report = new JsonSlurper().parse(new File(basedir, 'target/atomledger/report.json'))
-assert report.schemaVersion == '1.0'
+assert report.schemaVersion == '2.0'
 def model = report.models[0]
 def findings = model.reactions.collectMany { it.findings } + model.findings
 assert findings.collect { [it.ruleId, it.elementId, it.severity, it.baseline] }.toSorted { it.toString() } == [
@@ -11,6 +11,6 @@ assert findings.collect { [it.ruleId, it.elementId, it.severity, it.baseline] }.
         ['balance.elements', 'R_HEX', 'error', 'accepted'],
         ['balance.exempt', 'R_EX_glc', 'info', 'new']]
 assert report.summary.failed == false
-assert report.summary.gate == [failOn: 'findings', baseline: [file: 'models/atomledger-baseline.tsv',
+assert report.summary.gate == [failScope: 'findings', baseline: [file: 'models/atomledger-baseline.tsv',
                                                                accepted: 2, 'pending-reason': 0, new: 1, stale: 0]]
 return true

@@ -21,7 +21,7 @@ assert findings.find { it.ruleId == 'balance.regression' && it.elementId == 'R_H
         ['class': 'internal', 'delta.H': '-1', 'delta.charge': '-1', 'now.charge': 'imbalanced', 'now.elements': 'imbalanced',
          'was.charge': 'balanced', 'was.elements': 'balanced']
 assert findings.any { it.ruleId == 'balance.elements' && it.elementId == 'R_G6PH' && it.severity == 'error' }
-assert report.summary.gate == [failOn: 'regressions']
+assert report.summary.gate == [failScope: 'regressions']
 assert report.summary.failed == true
 def log = new File(basedir, 'build.log').text
 assert log.contains("AtomLedger: 2 finding(s) at or above 'error'")

@@ -16,7 +16,9 @@ import java.util.TreeMap;
  *
  * @param ruleId    the rule that produced it, {@code <area>.<kebab-name>}
  * @param severity  the effective severity after configuration
- * @param modelFile the model file relative to the project base directory, '/' separated
+ * @param modelFile the file the finding points at, relative to the project base directory, '/'
+ *                  separated: the model file, or the structure table for a problem in one of its
+ *                  rows ({@code structure.invalid}, {@code structure.unknown-species})
  * @param elementId the SBML id of the species or reaction, or the model id for model-level findings
  * @param line      1-based line of the element in the file, 0 when unknown
  * @param message   one sentence, no line breaks

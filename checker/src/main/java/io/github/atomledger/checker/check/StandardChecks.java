@@ -1,6 +1,8 @@
 package io.github.atomledger.checker.check;
 
+import io.github.atomledger.checker.check.balance.AbsentChemistryCheck;
 import io.github.atomledger.checker.check.balance.ChargeBalanceCheck;
+import io.github.atomledger.checker.check.balance.CommonCauseCheck;
 import io.github.atomledger.checker.check.balance.ChargeSyntaxCheck;
 import io.github.atomledger.checker.check.balance.ClassMismatchCheck;
 import io.github.atomledger.checker.check.balance.ElementBalanceCheck;
@@ -42,8 +44,11 @@ public final class StandardChecks {
                 new SymbolCheck(),
                 MissingChemistryCheck.formula(),
                 MissingChemistryCheck.charge(),
+                AbsentChemistryCheck.formulas(),
+                AbsentChemistryCheck.charges(),
                 new ElementBalanceCheck(),
                 new ChargeBalanceCheck(),
+                new CommonCauseCheck(),
                 new NotComputableCheck(),
                 new PolymerFormulaCheck(),
                 new ExemptReactionCheck(),

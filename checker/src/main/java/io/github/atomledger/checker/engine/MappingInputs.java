@@ -34,14 +34,25 @@ final class MappingInputs {
                     b.reactionClass().label() + " reaction: not mapped", List.of()));
         }
         TreeSet<String> missing = new TreeSet<>();
+        TreeSet<String> unreadable = new TreeSet<>();
+        java.util.Set<String> broken = structures.unreadable();
         for (Participant p : r.participants()) {
             if (structures.get(p.species()).isEmpty()) {
-                missing.add(p.species());
+                (broken.contains(p.species()) ? unreadable : missing).add(p.species());
             }
         }
-        if (!missing.isEmpty()) {
-            return early(ReactionMapping.without(r.id(), MapStatus.NO_STRUCTURE,
-                    "no structure for " + String.join(", ", missing), List.copyOf(missing)));
+        if (!missing.isEmpty() || !unreadable.isEmpty()) {
+            // A species whose structure text is broken is reported once, as structure.invalid, not
+            // also as missing (missingStructures feeds mapping.structure-missing).
+            List<String> why = new ArrayList<>();
+            if (!missing.isEmpty()) {
+                why.add("no structure for " + String.join(", ", missing));
+            }
+            if (!unreadable.isEmpty()) {
+                why.add("unreadable structure for " + String.join(", ", unreadable));
+            }
+            return early(ReactionMapping.without(r.id(), MapStatus.NO_STRUCTURE, String.join("; ", why),
+                    List.copyOf(missing)));
         }
         Map<String, Integer> reactants = new LinkedHashMap<>();
         Map<String, Integer> products = new LinkedHashMap<>();

@@ -34,8 +34,12 @@ import java.util.TreeMap;
  */
 public final class JsonReporter implements Reporter {
 
-    /** Bumped on any change of the report's shape. */
-    public static final String SCHEMA_VERSION = "1.0";
+    /**
+     * Bumped on any change of the report's shape or of a field's meaning (2.0: one set of balance
+     * counts, {@code failOnSeverity} and {@code gate.failScope} renamed, protonation grouped per
+     * model, structure-table findings located in the table; see {@code docs/reports.md}).
+     */
+    public static final String SCHEMA_VERSION = "2.0";
 
     @Override
     public ReportFormat format() {
@@ -72,7 +76,7 @@ public final class JsonReporter implements Reporter {
         s.put("models", result.models().size());
         s.put("reactions", result.models().stream().mapToInt(m -> m.reactions().size()).sum());
         s.put("findings", severityCounts(result.allFindings()));
-        s.put("failOn", result.config().failOn() == null ? "none" : result.config().failOn().label());
+        s.put("failOnSeverity", result.config().failOn() == null ? "none" : result.config().failOn().label());
         s.put("failed", !result.failing().isEmpty());
         if (result.gate() != GateMarks.NONE) {
             s.put("gate", gate(result));
@@ -84,7 +88,7 @@ public final class JsonReporter implements Reporter {
     private static Map<String, Object> gate(RunResult result) {
         GateMarks g = result.gate();
         Map<String, Object> o = new LinkedHashMap<>();
-        o.put("failOn", g.onlyRules().isEmpty() ? "findings" : "regressions");
+        o.put("failScope", g.onlyRules().isEmpty() ? "findings" : "regressions");
         if (g.hasBaseline()) {
             Map<String, Object> b = new LinkedHashMap<>();
             b.put("file", g.baselineFile());
@@ -118,8 +122,10 @@ public final class JsonReporter implements Reporter {
         summary.put("species", m.model().species().size());
         summary.put("reactions", m.reactions().size());
         summary.put("classes", classes);
-        summary.put("elementImbalanced", m.reactions().stream().filter(r -> r.balance().elementImbalanced()).count());
-        summary.put("chargeImbalanced", m.reactions().stream().filter(r -> r.balance().chargeImbalanced()).count());
+        ModelCounts counts = ModelCounts.of(m);
+        summary.put("elementImbalanced", counts.elements().imbalanced());
+        summary.put("chargeImbalanced", counts.charge().imbalanced());
+        summary.put("balance", counts.json());
         summary.put("findings", severityCounts(m.allFindings()));
         if (m.mapping().enabled()) {
             Map<String, Object> statuses = new TreeMap<>();

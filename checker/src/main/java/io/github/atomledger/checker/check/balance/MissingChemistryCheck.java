@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.check.balance;
 
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
@@ -17,7 +18,8 @@ import java.util.TreeSet;
 /**
  * {@code model.formula-missing} and {@code model.charge-missing}: a species that takes part in a
  * balance-checked reaction has no formula (or no charge). One finding per species, listing the
- * reactions it blocks. Data: {@code reactions} (comma list), {@code reactionCount}.
+ * reactions it blocks. Data: {@code reactions} (comma list), {@code reactionCount}. When no species
+ * of the model has one, {@link AbsentChemistryCheck} says so once and this check reports nothing.
  */
 public final class MissingChemistryCheck implements ModelCheck {
 
@@ -53,6 +55,9 @@ public final class MissingChemistryCheck implements ModelCheck {
 
     @Override
     public List<Finding> check(CheckContext context) {
+        if (AbsentChemistryCheck.absent(context.model(), charge)) {
+            return List.of();
+        }
         Map<String, TreeSet<String>> blocked = new LinkedHashMap<>();
         for (ReactionInfo r : context.model().reactions()) {
             if (!context.balance(r.id()).reactionClass().balanceComputed()) {
@@ -71,10 +76,10 @@ public final class MissingChemistryCheck implements ModelCheck {
         for (Map.Entry<String, TreeSet<String>> e : blocked.entrySet()) {
             SpeciesInfo s = context.model().species(e.getKey()).orElseThrow();
             String what = charge ? "charge" : "formula";
-            List<String> shown = e.getValue().stream().limit(5).toList();
-            String list = String.join(", ", shown) + (e.getValue().size() > 5 ? ", ..." : "");
+            String list = Wording.shortList(e.getValue(), 5);
             out.add(context.finding(this, s.id(), s.line(), "Species " + s.id() + " has no " + what + ", so the "
-                    + what + " balance of " + e.getValue().size() + " reaction(s) cannot be computed: " + list + ".",
+                    + (charge ? "charge" : "element") + " balance of " + Wording.count(e.getValue().size(), "reaction")
+                    + " cannot be computed: " + list + ".",
                     Map.of("reactions", String.join(",", e.getValue()),
                             "reactionCount", Integer.toString(e.getValue().size()))));
         }

@@ -9,10 +9,18 @@ import java.util.Optional;
 /**
  * The structure chosen for each species, with where it came from, and the problems met while
  * resolving them. Immutable.
+ *
+ * @param tableFile the structure table as reports name it (relative to the project directory), or
+ *                  "" when there is none; findings about a table row point at this file
  */
-public record SpeciesStructures(Map<String, Resolved> bySpecies, List<Problem> problems) {
+public record SpeciesStructures(Map<String, Resolved> bySpecies, List<Problem> problems, String tableFile) {
 
     public static final SpeciesStructures EMPTY = new SpeciesStructures(Map.of(), List.of());
+
+    /** Without a structure table. */
+    public SpeciesStructures(Map<String, Resolved> bySpecies, List<Problem> problems) {
+        this(bySpecies, problems, "");
+    }
 
     /** Sources in order of precedence. */
     public enum Source {
@@ -43,6 +51,14 @@ public record SpeciesStructures(Map<String, Resolved> bySpecies, List<Problem> p
     public SpeciesStructures {
         bySpecies = Map.copyOf(bySpecies);
         problems = List.copyOf(problems);
+        tableFile = tableFile == null ? "" : tableFile;
+    }
+
+    /** Species whose structure text cannot be read (from any source): they have a structure, a broken one. */
+    public java.util.Set<String> unreadable() {
+        java.util.Set<String> out = new java.util.TreeSet<>();
+        problems.stream().filter(p -> p.kind().equals("invalid")).forEach(p -> out.add(p.species()));
+        return out;
     }
 
     public Optional<Resolved> get(String species) {

@@ -35,8 +35,8 @@ public final class StructureResolver {
         for (StructureTable.Entry e : table.entries().values()) {
             if (model.species(e.species()).isEmpty()) {
                 problems.add(new SpeciesStructures.Problem(e.species(), "unknown-species", SpeciesStructures.Source.TABLE,
-                        e.text(), "the structure table (line " + e.line() + ") names species " + e.species()
-                        + ", which the model does not define", e.line()));
+                        e.text(), "the structure table names species " + e.species() + ", which " + model.file()
+                        + " does not define", e.line()));
             }
         }
         for (SpeciesInfo s : model.species()) {
@@ -66,7 +66,7 @@ public final class StructureResolver {
                 }
             }
         }
-        return new SpeciesStructures(chosen, problems);
+        return new SpeciesStructures(chosen, problems, table.file());
     }
 
     private static void add(List<SpeciesStructures.Resolved> out, List<SpeciesStructures.Problem> problems, String species,

@@ -20,14 +20,16 @@ class StructureFormulaCheckTest {
 
     @Test
     void reportsAProtonationOnlyDifferenceAsItsOwnMilderFinding() {
+        // Issue #13: one finding per model lists every protonation-only species.
         assertThat(findings("structure.protonation")).singleElement().satisfies(f -> {
-            assertThat(f.elementId()).isEqualTo("M_pyr_c");
+            assertThat(f.elementId()).isEqualTo("structures");
+            assertThat(f.line()).isZero();
             assertThat(f.severity()).isEqualTo(Severity.WARNING);
-            assertThat(f.data()).containsEntry("declared", "C3H3O3").containsEntry("derived", "C3H4O3")
-                    .containsEntry("delta.H", "-1").containsEntry("delta.charge", "-1")
-                    .containsEntry("declaredCharge", "-1").containsEntry("derivedCharge", "0").containsEntry("source", "table");
-            assertThat(f.message()).isEqualTo("Species M_pyr_c is declared as C3H3O3 (charge -1) but its structure is C3H4O3"
-                    + " (charge 0): the structure has 1 proton(s) more, a protonation-state difference only.");
+            assertThat(f.data()).containsExactlyEntriesOf(new java.util.TreeMap<>(java.util.Map.of(
+                    "species", "M_pyr_c", "protons", "+1", "count", "1")));
+            assertThat(f.message()).isEqualTo("1 species has a structure that differs from the declared formula and"
+                    + " charge only by protons, a protonation-state difference (structure minus declared: M_pyr_c +1);"
+                    + " the reports list every one.");
         });
     }
 
@@ -44,7 +46,13 @@ class StructureFormulaCheckTest {
         assertThat(findings("structure.invalid")).singleElement().satisfies(f -> {
             assertThat(f.elementId()).isEqualTo("M_bad_c");
             assertThat(f.data()).containsEntry("text", "C1CC").containsEntry("source", "table");
+            // Issue #13: a bad table row is reported at the table's file and line, and only once.
+            assertThat(f.modelFile()).isEqualTo("formula-vs-structure.tsv");
+            assertThat(f.line()).isEqualTo(7);
         });
+        assertThat(TestModels.result("structure/formula-vs-structure.xml", "structure/formula-vs-structure.tsv").allFindings())
+                .filteredOn(f -> f.ruleId().equals("mapping.structure-missing")).extracting(Finding::elementId)
+                .doesNotContain("M_bad_c");
     }
 
     @Test
