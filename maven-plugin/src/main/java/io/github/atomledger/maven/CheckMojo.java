@@ -214,8 +214,13 @@ public final class CheckMojo extends AbstractMojo {
             throw ConfigMapper.failure("AtomLedger configuration: " + e.getMessage(), e);
         }
         boolean colour = ConsoleSummary.colourWanted(System.getenv(), System.console() != null);
-        for (String line : ConsoleSummary.lines(result, colour)) {
-            getLog().info(line);
+        MavenRunListener log = new MavenRunListener(getLog());
+        for (ConsoleSummary.Line line : ConsoleSummary.report(result, colour)) {
+            switch (line.level()) {
+                case ERROR -> log.error(line.text());
+                case WARNING -> log.warn(line.text());
+                default -> log.info(line.text());
+            }
         }
         for (Path p : written) {
             getLog().info("report: " + ConfigMapper.display(config.baseDirectory(), p));

@@ -1,5 +1,6 @@
 package io.github.atomledger.maven;
 
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.check.StandardChecks;
@@ -17,7 +18,6 @@ import java.io.File;
 import java.time.Duration;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -190,21 +190,21 @@ final class ConfigMapper {
     static String failureSummary(RunResult result, List<Path> written, Path base) {
         List<Finding> failing = result.failing();
         Map<Severity, Integer> counts = result.countsBySeverity();
-        StringBuilder sb = new StringBuilder("AtomLedger: ").append(failing.size()).append(" finding(s) at or above '")
-                .append(result.config().failOn().label()).append("' (").append(counts.get(Severity.ERROR))
-                .append(" errors, ").append(counts.get(Severity.WARNING)).append(" warnings, ")
+        StringBuilder sb = new StringBuilder("AtomLedger: ").append(Wording.count(failing.size(), "finding"))
+                .append(" at or above '").append(result.config().failOn().label()).append("' (")
+                .append(Wording.count(counts.get(Severity.ERROR), "error")).append(", ")
+                .append(Wording.count(counts.get(Severity.WARNING), "warning")).append(", ")
                 .append(counts.get(Severity.INFO)).append(" info): ");
-        Set<String> shown = new LinkedHashSet<>();
+        Map<String, List<String>> byRule = new java.util.TreeMap<>();
         for (Finding f : failing) {
-            shown.add(f.ruleId() + " " + f.elementId());
-            if (shown.size() == 5) {
-                break;
+            List<String> ids = byRule.computeIfAbsent(f.ruleId(), k -> new ArrayList<>());
+            if (!ids.contains(f.elementId())) {
+                ids.add(f.elementId());
             }
         }
-        sb.append(String.join(", ", shown));
-        if (failing.size() > shown.size()) {
-            sb.append(", ...");
-        }
+        List<String> parts = new ArrayList<>();
+        byRule.forEach((rule, ids) -> parts.add(rule + " (" + ids.size() + "): " + Wording.shortList(ids, 3)));
+        sb.append(String.join("; ", parts));
         if (!written.isEmpty()) {
             sb.append("; report: ").append(display(base, written.get(0)));
         }

@@ -24,6 +24,11 @@ final class MavenRunListener implements RunListener {
     }
 
     @Override
+    public void error(String line) {
+        log.error(line);
+    }
+
+    @Override
     public void debug(String line) {
         if (log.isDebugEnabled()) {
             log.debug(line);

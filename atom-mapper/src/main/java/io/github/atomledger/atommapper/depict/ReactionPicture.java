@@ -9,8 +9,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
-import java.util.TreeMap;
-import java.util.TreeSet;
 import org.openscience.cdk.depict.Depiction;
 import org.openscience.cdk.depict.DepictionGenerator;
 import org.openscience.cdk.exception.CDKException;
@@ -21,13 +19,18 @@ import org.openscience.cdk.interfaces.IReaction;
 import org.openscience.cdk.silent.SilentChemObjectBuilder;
 import org.openscience.cdk.smiles.SmilesParser;
 import org.openscience.cdk.CDKConstants;
+import org.openscience.cdk.renderer.elements.MarkedElement;
+import org.openscience.cdk.renderer.generators.standard.StandardGenerator;
 
 /**
- * Draws a mapped reaction as SVG with CDK's depiction: every carbon of the reactants gets a
- * colour of its own (by its map number, cycling through {@link #PALETTE}), and each product carbon
- * glows in the colour of the reactant carbon it came from, so the eye can follow each carbon
- * across the arrow. Optionally the map numbers (reactant atom indices: heavy atoms numbered
- * 1..n over the reactants in input order, copies expanded) are printed beside every mapped atom.
+ * Draws a mapped reaction as SVG with CDK's depiction. Molecules (or parts of molecules) that the
+ * map carries over unchanged, such as cofactors, carriers and currency metabolites, are drawn
+ * muted; every carbon that moves between molecules or changes a bond gets a look of its own: a
+ * colour (cycling through {@link #PALETTE}) and its map number as a small label (reactant heavy
+ * atoms numbered 1..n in input order, copies expanded), and each product carbon glows in the
+ * colour and carries the number of the reactant carbon it came from, so the eye can follow it
+ * across the arrow. How carbons are chosen: {@link CarbonLooks}. Optionally the map numbers of
+ * all other unmuted mapped atoms are printed too.
  *
  * <pre>{@code
  * String svg = ReactionPicture.of(input, result).titles(Map.of("pyr_c", "pyruvate")).svg();
@@ -40,8 +43,8 @@ import org.openscience.cdk.CDKConstants;
  * a host without any font may fail. Not thread-safe per instance; build one per picture.
  *
  * <p>Does not handle: hydrogen transitions (hydrogens are implicit), stereo marks beyond what
- * CDK draws from the SMILES, more than seven carbons in distinct colours (colours repeat; switch
- * on {@link #atomIndices(boolean)} to tell them apart).
+ * CDK draws from the SMILES, more than seven distinct colours (colours repeat past seven; the
+ * labels keep every coloured carbon distinct).
  */
 public final class ReactionPicture {
 
@@ -55,6 +58,19 @@ public final class ReactionPicture {
             new Color(0xE6, 0x9F, 0x00), new Color(0x56, 0xB4, 0xE9), new Color(0x00, 0x9E, 0x73),
             new Color(0xCC, 0x79, 0xA7), new Color(0x00, 0x72, 0xB2), new Color(0xD5, 0x5E, 0x00),
             new Color(0xF0, 0xE4, 0x42));
+
+    /**
+     * The drawing style; part of every cache key of pictures, so a change of colours, muting or
+     * labels here redraws cached pictures. 2: cofactors muted, only carbons that move or change
+     * coloured, each with its map number (issue 13).
+     */
+    public static final int STYLE_VERSION = 2;
+
+    /** Opacity of muted atoms and bonds. */
+    private static final String MUTED_OPACITY = "0.3";
+
+    private static final java.util.regex.Pattern MUTED_ELEMENT = java.util.regex.Pattern.compile(
+            "(<[a-z]+\\b[^>]*?\\sclass=(['\"])" + CarbonLooks.MUTED + "\\b[^'\"]*\\2)");
 
     /** Titles and indices: near-black, readable on white whatever the colour vision. */
     private static final Color TEXT = new Color(0x33, 0x33, 0x33);
@@ -111,7 +127,7 @@ public final class ReactionPicture {
         return this;
     }
 
-    /** Prints the map number beside each mapped atom. Default off. */
+    /** Prints the map number beside every mapped atom that is not muted (coloured carbons always have one). Default off. */
     public ReactionPicture atomIndices(boolean on) {
         this.atomIndices = on;
         return this;
@@ -147,62 +163,43 @@ public final class ReactionPicture {
         setTitles(rxn.getReactants(), left);
         setTitles(rxn.getProducts(), right);
 
-        TreeSet<Integer> reactantCarbons = new TreeSet<>();
-        for (IAtomContainer mol : rxn.getReactants().atomContainers()) {
-            for (IAtom a : mol.atoms()) {
-                if (isCarbon(a) && a.getMapIdx() > 0) {
-                    reactantCarbons.add(a.getMapIdx());
-                }
-            }
-        }
-        Map<Integer, Integer> colourOf = new TreeMap<>();
-        for (int map : reactantCarbons) {
-            colourOf.put(map, colourOf.size() % PALETTE.size());
-        }
-        List<List<IChemObject>> groups = new ArrayList<>();
-        for (int i = 0; i < PALETTE.size(); i++) {
-            groups.add(new ArrayList<>());
-        }
-        collect(rxn.getReactants(), colourOf, groups);
-        collect(rxn.getProducts(), colourOf, groups);
-
+        CarbonLooks looks = CarbonLooks.of(rxn, PALETTE);
         DepictionGenerator gen = new DepictionGenerator().withMolTitle().withMappedRxnAlign(true)
                 .withOuterGlowHighlight(6.0).withFillToFit()
                 .withTitleColor(TEXT).withAnnotationColor(TEXT);
-        for (int i = 0; i < PALETTE.size(); i++) {
-            if (!groups.get(i).isEmpty()) {
-                gen = gen.withHighlight(groups.get(i), PALETTE.get(i));
-            }
+        for (Map.Entry<Color, List<IChemObject>> e : looks.highlights().entrySet()) {
+            gen = gen.withHighlight(e.getValue(), e.getKey());
         }
         if (atomIndices) {
-            gen = gen.withAtomMapNumbers();
+            labelEveryMappedAtom(rxn);
         }
         try {
-            return gen.depict(rxn).toSvgStr(Depiction.UNITS_PX);
+            return mute(gen.depict(rxn).toSvgStr(Depiction.UNITS_PX));
         } catch (CDKException e) {
             throw new IllegalStateException("cannot draw " + reactionId + ": " + e.getMessage(), e);
         }
     }
 
-    private static void collect(Iterable<IAtomContainer> mols, Map<Integer, Integer> colourOf,
-                                List<List<IChemObject>> groups) {
-        for (IAtomContainer mol : mols) {
-            for (IAtom a : mol.atoms()) {
-                Integer c = isCarbon(a) ? colourOf.get(a.getMapIdx()) : null;
-                if (c != null) {
-                    groups.get(c).add(a);
+    /** Map numbers beside every mapped atom that is not muted (coloured carbons have theirs already). */
+    private static void labelEveryMappedAtom(IReaction rxn) {
+        for (org.openscience.cdk.interfaces.IAtomContainerSet set : List.of(rxn.getReactants(), rxn.getProducts())) {
+            for (IAtomContainer mol : set.atomContainers()) {
+                for (IAtom a : mol.atoms()) {
+                    if (a.getMapIdx() > 0 && !CarbonLooks.MUTED.equals(a.getProperty(MarkedElement.CLASS_KEY))) {
+                        a.setProperty(StandardGenerator.ANNOTATION_LABEL, Integer.toString(a.getMapIdx()));
+                    }
                 }
             }
         }
     }
 
-    private static void collect(org.openscience.cdk.interfaces.IAtomContainerSet set, Map<Integer, Integer> colourOf,
-                                List<List<IChemObject>> groups) {
-        collect(set.atomContainers(), colourOf, groups);
-    }
-
-    private static boolean isCarbon(IAtom a) {
-        return a.getAtomicNumber() != null && a.getAtomicNumber() == 6;
+    /**
+     * Gives CDK's muted atoms and bonds ({@code class="muted ..."}) a low opacity, in the SVG itself
+     * so the drawing looks the same wherever it is shown.
+     */
+    static String mute(String svg) {
+        return MUTED_ELEMENT.matcher(svg).replaceAll(m -> java.util.regex.Matcher.quoteReplacement(
+                m.group(1) + " opacity=" + m.group(2) + MUTED_OPACITY + m.group(2)));
     }
 
     /** One title per molecule, copies expanded, when the SMILES has one molecule per copy. */

@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.diff;
 
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.atommapper.formula.Rational;
 import io.github.atomledger.atommapper.mapping.AtomRef;
 import io.github.atomledger.atommapper.mapping.AtomTransition;
@@ -210,8 +211,9 @@ public final class ReleaseDiff {
         data.put("now", is.isEmpty() ? "none" : "mapped");
         String message = is.isEmpty()
                 ? "Reaction " + r.id() + " had carbon transitions in the previous release and has none now."
-                : "Reaction " + r.id() + "'s carbon transitions changed: " + moved + " carbon(s) now go elsewhere ("
-                + String.join("; ", named) + (moved > named.size() ? "; ..." : "") + ").";
+                : "Reaction " + r.id() + "'s carbon transitions changed: " + Wording.count(moved, "carbon") + (moved == 1 ? " now goes" : " now go")
+                + " elsewhere (" + String.join("; ", named) + (moved > named.size() ? " and " + (moved - named.size())
+                + " more" : "") + ").";
         return java.util.Optional.of(finding(TRANSITIONS, file, r, message, data));
     }
 

@@ -16,6 +16,11 @@ public interface RunListener {
     default void warn(String line) {
     }
 
+    /** A line about what fails the run; listeners without an error level show it as a warning. */
+    default void error(String line) {
+        warn(line);
+    }
+
     default void debug(String line) {
     }
 }

@@ -216,12 +216,17 @@ final class HtmlReaction {
         StringBuilder caption = new StringBuilder(map.summary());
         if (!map.svg().isEmpty()) {
             caption.append(caption.length() == 0 ? "" : " ")
-                    .append("Each mapped carbon has the colour of the reactant carbon it comes from.");
+                    .append("Carbons that move between molecules or change a bond are coloured and numbered; each"
+                            + " keeps its colour and number across the arrow. Parts the reaction leaves unchanged"
+                            + " (cofactors, carriers) are drawn faint.");
         }
         x.leaf("figcaption", null, caption.toString()).nl();
-        if (!map.notes().isEmpty()) {
+        // A note already said by one of the card's findings (the stereo pin) is not repeated.
+        List<String> notes = map.notes().stream()
+                .filter(n -> r.findings().stream().noneMatch(f -> f.message().contains(n))).toList();
+        if (!notes.isEmpty()) {
             x.start("ul", "findings");
-            for (String n : map.notes()) {
+            for (String n : notes) {
                 x.leaf("li", null, n);
             }
             x.end().nl();

@@ -2,6 +2,7 @@ package io.github.atomledger.checker.report;
 
 import io.github.atomledger.checker.engine.ReportFormat;
 import io.github.atomledger.checker.Version;
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.engine.ModelResult;
@@ -22,11 +23,15 @@ import javax.xml.stream.XMLStreamException;
 
 /**
  * Writes {@code report.html}: one self-contained page (inline CSS and SVG, no scripts, no fonts or
- * images fetched) that opens offline. Per model a summary (reactions by class, findings by
- * severity, mapping status when mapping data is present, model-level findings), then one card per
- * reaction: the equation with species names and ids, the balance table, the findings, the fix
- * hint from the finding data ({@code fix.*}) and, when the {@link MappingSource} has one, the
- * drawing of the atom map. Filters by severity, rule and mapping status work without scripts.
+ * images fetched) that opens offline. Problems first: the header with the verdict, then the
+ * overview ({@link HtmlOverview}: likely causes, what fails the build, warnings, each linking to
+ * its card; info collapsed), then any further run-level {@link #SECTIONS}, the filters, and per
+ * model a summary (reactions by class, findings by severity, the balance counts of
+ * {@link ModelCounts}, mapping status when mapping data is present, findings on species and the
+ * model) and one card per reaction, failing ones first: the equation with species names and ids,
+ * the balance table, the findings, the fix hint from the finding data ({@code fix.*}) and, when
+ * the {@link MappingSource} has one, the drawing of the atom map. Filters by severity, rule and
+ * mapping status work without scripts and offer only values that occur.
  *
  * <p>Markup is written with {@code XMLStreamWriter} (serialised as HTML5-compatible XML: every
  * non-void element has an end tag), so the file is also well-formed XML. Same result, same bytes.
@@ -34,6 +39,12 @@ import javax.xml.stream.XMLStreamException;
 public final class HtmlReporter implements Reporter {
 
     static final String NO_MAP = "no-map";
+
+    /**
+     * Run-level sections between the header and the filters, in order; another feature's section
+     * (pathways, coverage) is one more entry here.
+     */
+    static final List<HtmlSection> SECTIONS = List.of(new HtmlOverview());
 
     /** The most drawings one report holds (each is some 30 kB of SVG); later ones are left out. */
     public static final int MAX_PICTURES = 400;
@@ -65,20 +76,29 @@ public final class HtmlReporter implements Reporter {
     public String toHtml(RunResult result) {
         try {
             Map<ModelResult, Map<String, MapPicture>> maps = new LinkedHashMap<>();
+            Map<ModelResult, String> prefixes = new LinkedHashMap<>();
             TreeSet<String> rules = new TreeSet<>();
             TreeSet<String> statuses = new TreeSet<>();
+            TreeSet<String> severities = new TreeSet<>();
+            boolean mapped = false;
             for (ModelResult m : result.models()) {
+                prefixes.put(m, "m" + prefixes.size());
                 Map<String, MapPicture> mm = new LinkedHashMap<>();
                 for (ReactionResult r : m.reactions()) {
                     Optional<MapPicture> rm = mappings.mapping(m, r);
                     rm.ifPresent(x -> mm.put(r.id(), x));
                     statuses.add(rm.map(MapPicture::status).orElse(NO_MAP));
+                    Severity worst = Families.worst(r.findings());
+                    severities.add(worst == null ? "clean" : worst.label());
                 }
+                mapped |= !mm.isEmpty();
                 maps.put(m, mm);
                 m.allFindings().forEach(f -> rules.add(f.ruleId()));
+                m.modelFindings().forEach(f -> severities.add(f.severity().label()));
             }
-            List<String> severities = List.of("error", "warning", "info", "clean");
+            List<String> severityTokens = SEVERITY_ORDER.stream().filter(severities::contains).toList();
             List<String> ruleTokens = rules.stream().map(HtmlReporter::token).toList();
+            List<String> statusTokens = mapped ? new ArrayList<>(statuses) : List.of();
 
             XmlOut x = new XmlOut();
             x.doctype("<!DOCTYPE html>");
@@ -88,21 +108,24 @@ public final class HtmlReporter implements Reporter {
             x.empty("meta").attr("name", "viewport").attr("content", "width=device-width, initial-scale=1").nl();
             x.empty("meta").attr("name", "generator").attr("content", "AtomLedger " + Version.get()).nl();
             x.leaf("title", null, "AtomLedger report").nl();
-            x.start("style").text(HtmlStyle.BASE).text(HtmlStyle.filters(severities, ruleTokens,
-                    new ArrayList<>(statuses))).end().nl();
+            x.start("style").text(HtmlStyle.BASE).text(HtmlStyle.filters(severityTokens, ruleTokens, statusTokens))
+                    .end().nl();
             x.end().nl();
             x.start("body").nl();
             header(x, result);
-            filterInputs(x, "sev", severities);
+            for (HtmlSection section : SECTIONS) {
+                section.write(x, result, prefixes);
+            }
+            filterInputs(x, "sev", severityTokens);
             filterInputs(x, "rule", ruleTokens);
-            filterInputs(x, "st", new ArrayList<>(statuses));
-            x.empty("input").attr("type", "checkbox").attr("id", "show-idx").attr("class", "radio").nl();
-            nav(x, severities, new ArrayList<>(rules), new ArrayList<>(statuses));
+            if (!statusTokens.isEmpty()) {
+                filterInputs(x, "st", statusTokens);
+            }
+            nav(x, severityTokens, new ArrayList<>(rules), statusTokens);
             x.start("main").nl();
-            int index = 0;
             int[] budget = {MAX_PICTURES};
             for (ModelResult m : result.models()) {
-                new HtmlModel(x, m, maps.get(m), "m" + index++, budget).write();
+                new HtmlModel(x, m, maps.get(m), prefixes.get(m), budget, result).write();
             }
             x.end().nl();
             x.end().nl();
@@ -113,6 +136,22 @@ public final class HtmlReporter implements Reporter {
         }
     }
 
+    private static final List<String> SEVERITY_ORDER = List.of("error", "warning", "info", "clean");
+
+    /**
+     * The id of the element a finding is shown on: its reaction card ({@code m0-R_PFK}), or its row
+     * in the model's table of findings on species and the model ({@code m0-f3}).
+     */
+    static String anchor(String prefix, ModelResult m, Finding f) {
+        List<Finding> rows = m.modelFindings();
+        for (int i = 0; i < rows.size(); i++) {
+            if (rows.get(i) == f) {
+                return prefix + "-f" + i;
+            }
+        }
+        return prefix + "-" + token(f.elementId());
+    }
+
     private static void header(XmlOut x, RunResult result) throws XMLStreamException {
         Map<Severity, Integer> counts = result.countsBySeverity();
         boolean failed = !result.failing().isEmpty();
@@ -120,13 +159,19 @@ public final class HtmlReporter implements Reporter {
         x.leaf("h1", null, "AtomLedger report").nl();
         x.start("p", "lead");
         x.leaf("span", "verdict " + (failed ? "failed" : "passed"), failed ? "FAILED" : "PASSED");
-        x.text(" " + result.models().size() + " model(s), "
-                + result.models().stream().mapToInt(m -> m.reactions().size()).sum() + " reactions; "
-                + counts.get(Severity.ERROR) + " errors, " + counts.get(Severity.WARNING) + " warnings, "
-                + counts.get(Severity.INFO) + " info"
+        x.text(" " + Wording.count(result.models().size(), "model") + ", "
+                + Wording.count(result.models().stream().mapToInt(m -> m.reactions().size()).sum(), "reaction") + "; "
+                + Wording.count(counts.get(Severity.ERROR), "error") + ", "
+                + Wording.count(counts.get(Severity.WARNING), "warning") + ", " + counts.get(Severity.INFO) + " info"
                 + (result.config().failOn() == null ? "; findings never fail this run."
                 : "; the run fails at " + result.config().failOn().label() + "."));
         x.end().nl();
+        for (ModelResult m : result.models()) {
+            String why = ModelCounts.of(m).whyCharge();
+            if (!why.isEmpty() && why.startsWith("no species")) {
+                x.leaf("p", "lead-note", m.file() + ": charge balance not checked, " + why + ".").nl();
+            }
+        }
         x.leaf("p", "caveat", "Balance and atom maps are computed from the formulas, charges and structures in "
                 + "the model files. They point at likely curation errors; they do not replace expert review.").nl();
         x.end().nl();
@@ -144,12 +189,12 @@ public final class HtmlReporter implements Reporter {
     private static void nav(XmlOut x, List<String> severities, List<String> rules, List<String> statuses)
             throws XMLStreamException {
         x.start("nav", "filters").attr("aria-label", "filters").nl();
+        x.leaf("span", "gname", "Show cards:");
         navGroup(x, "severity", "sev", severities, severities);
         navGroup(x, "rule", "rule", rules.stream().map(HtmlReporter::token).toList(), rules);
-        navGroup(x, "map status", "st", statuses, statuses);
-        x.start("div", "group");
-        x.start("label").attr("for", "show-idx").text("atom indices").end();
-        x.end().nl();
+        if (!statuses.isEmpty()) {
+            navGroup(x, "map status", "st", statuses, statuses);
+        }
         x.end().nl();
     }
 

@@ -62,10 +62,26 @@ final class HtmlStyle {
             figure.pic{margin:8px 0;overflow-x:auto}
             figure.pic svg{max-width:100%;height:auto;background:#fff}
             figure.pic figcaption{font-size:12px;color:var(--mute)}
-            figure.pic svg .annotation{display:none}
-            #show-idx:checked ~ main figure.pic svg .annotation{display:inline}
-            #show-idx:checked ~ nav label[for=show-idx]{background:var(--ink);color:#fff}
             .nomap{color:var(--mute);font-size:13px;margin:4px 0}
+            .lead-note{margin:6px 0 0;font-weight:600;color:var(--ink)}
+            section.overview{padding:12px 28px 6px;background:#fff;border-bottom:1px solid var(--line)}
+            section.overview h2{font-size:18px;margin:10px 0 6px}
+            section.overview h2.fails{color:var(--err)}
+            section.overview h2.passes{color:var(--ok)}
+            section.overview h3{font-size:14px;margin:10px 0 2px;font-weight:600}
+            section.overview h3 .count{color:var(--mute);font-weight:400}
+            .causes{border-left:6px solid var(--warn);background:#fff8e6;padding:4px 12px;margin:6px 0 10px}
+            .causes h2{margin:4px 0}
+            .cause{margin:4px 0;font-size:15px}
+            .links{margin:2px 0 6px;font-size:13px}
+            .group.failing h3 .rule{color:var(--err)}
+            ul.problems{margin:2px 0 4px;padding-left:18px;font-size:14px}
+            ul.problems li{margin:1px 0}
+            details.more summary,details.info-list summary{margin:2px 0}
+            details.info-list{margin:10px 0 6px}
+            .why{white-space:normal;color:var(--mute)}
+            td.where{font-family:ui-monospace,Menlo,Consolas,monospace;font-size:12px;white-space:nowrap}
+            ul.listed{columns:3 18em;font-size:12px;margin:4px 0}
             details summary{cursor:pointer;color:var(--mute);font-size:13px}
             """;
 

@@ -125,6 +125,12 @@ public final class JunitReporter implements Reporter {
         property(x, "modelFile", s.model.file());
         property(x, "modelId", s.model.model().modelId());
         property(x, "sbml", "level " + s.model.model().level() + " version " + s.model.model().version());
+        ModelCounts counts = ModelCounts.of(s.model);
+        property(x, "balanceChecked", Integer.toString(counts.checked()));
+        property(x, "elementImbalanced", Integer.toString(counts.elements().imbalanced()));
+        property(x, "elementsNotComputable", Integer.toString(counts.elements().notComputable()));
+        property(x, "chargeImbalanced", Integer.toString(counts.charge().imbalanced()));
+        property(x, "chargeNotComputable", Integer.toString(counts.charge().notComputable()));
         x.indent(2).end();
         for (Case c : s.cases) {
             x.indent(2).start("testcase").attr("name", c.name).attr("classname", c.classname).attr("time", "0");

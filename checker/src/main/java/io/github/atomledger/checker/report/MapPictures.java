@@ -6,6 +6,7 @@ import io.github.atomledger.atommapper.mapping.MappingStatus;
 import io.github.atomledger.atommapper.mapping.ReactionInput;
 
 import io.github.atomledger.atommapper.formula.Rational;
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.engine.ModelResult;
 import io.github.atomledger.checker.engine.ReactionResult;
@@ -39,10 +40,10 @@ public final class MapPictures {
      */
     public static MapPicture of(ReactionInput input, MappingResult result, Map<String, String> titles) {
         String svg = ReactionPicture.drawable(result)
-                ? ReactionPicture.of(input, result).titles(titles).atomIndices(true).svg() : "";
+                ? ReactionPicture.of(input, result).titles(titles).svg() : "";
         List<String> notes = new ArrayList<>(result.stereoNotes());
         if (result.status() == MappingStatus.AMBIGUOUS && !result.alternatives().isEmpty()) {
-            notes.add(result.alternatives().size() + " other co-optimal carbon map(s) exist; the drawing shows one.");
+            notes.add(otherMaps(result.alternatives().size()));
         }
         return new MapPicture(result.status().label(), summary(result), svg, notes);
     }
@@ -63,11 +64,11 @@ public final class MapPictures {
                 titles.put(s.id(), s.name());
             }
             svg = ReactionPicture.of(m.reactionId(), m.mappedSmiles(), molecules(reaction.reaction().reactants()),
-                    molecules(reaction.reaction().products())).titles(titles).atomIndices(true).svg();
+                    molecules(reaction.reaction().products())).titles(titles).svg();
         }
         List<String> notes = new ArrayList<>(m.stereoNotes());
         if (!m.alternatives().isEmpty()) {
-            notes.add(m.alternatives().size() + " other co-optimal carbon map(s) exist; the drawing shows one.");
+            notes.add(otherMaps(m.alternatives().size()));
         }
         return Optional.of(new MapPicture(m.status().label(), summary(m), svg, notes));
     }
@@ -94,14 +95,19 @@ public final class MapPictures {
         return out;
     }
 
+    private static String otherMaps(int n) {
+        return n + (n == 1 ? " other co-optimal carbon map exists" : " other co-optimal carbon maps exist")
+                + "; the drawing shows one.";
+    }
+
     static String summary(ReactionMapping m) {
         String reason = m.reason().isEmpty() || m.reason().endsWith(".") ? m.reason() : m.reason() + ".";
         int carbons = m.carbons().size();
         return switch (m.status()) {
-            case MAPPED -> "Mapped: " + carbons + " carbon(s), " + m.cost() + " weighted bond edit(s), proven minimum.";
-            case AMBIGUOUS -> "Ambiguous: " + carbons + " carbon(s), " + m.cost()
-                    + " weighted bond edit(s), proven minimum, but co-optimal maps move some carbons elsewhere.";
-            case BEST_FOUND -> "Best found: " + carbons + " carbon(s), " + m.cost() + " weighted bond edit(s), lower bound "
+            case MAPPED -> "Mapped: " + Wording.count(carbons, "carbon") + ", " + Wording.count(m.cost(), "weighted bond edit") + ", proven minimum.";
+            case AMBIGUOUS -> "Ambiguous: " + Wording.count(carbons, "carbon") + ", " + Wording.count(m.cost(), "weighted bond edit")
+                    + ", proven minimum, but co-optimal maps move some carbons elsewhere.";
+            case BEST_FOUND -> "Best found: " + Wording.count(carbons, "carbon") + ", " + Wording.count(m.cost(), "weighted bond edit") + ", lower bound "
                     + m.lowerBound() + " (not proven optimal): " + reason;
             case UNMAPPABLE -> "Not mappable: " + reason;
             case NO_STRUCTURE -> "No structure: " + reason;
@@ -113,10 +119,10 @@ public final class MapPictures {
         int carbons = r.carbonTransitions().size();
         String reason = r.reason().isEmpty() || r.reason().endsWith(".") ? r.reason() : r.reason() + ".";
         return switch (r.status()) {
-            case MAPPED -> "Mapped: " + carbons + " carbon(s), " + r.cost() + " weighted bond edit(s), proven minimum.";
-            case AMBIGUOUS -> "Ambiguous: " + carbons + " carbon(s), " + r.cost()
-                    + " weighted bond edit(s), proven minimum, but co-optimal maps move some carbons elsewhere.";
-            case BEST_FOUND -> "Best found: " + carbons + " carbon(s), " + r.cost() + " weighted bond edit(s), lower bound "
+            case MAPPED -> "Mapped: " + Wording.count(carbons, "carbon") + ", " + Wording.count(r.cost(), "weighted bond edit") + ", proven minimum.";
+            case AMBIGUOUS -> "Ambiguous: " + Wording.count(carbons, "carbon") + ", " + Wording.count(r.cost(), "weighted bond edit")
+                    + ", proven minimum, but co-optimal maps move some carbons elsewhere.";
+            case BEST_FOUND -> "Best found: " + Wording.count(carbons, "carbon") + ", " + Wording.count(r.cost(), "weighted bond edit") + ", lower bound "
                     + r.lowerBound() + " (not proven optimal): " + reason;
             case UNMAPPABLE -> "Not mappable: " + reason;
             case TOO_LARGE -> "Not attempted: " + reason;

@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.report;
 
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.engine.ReportFormat;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.Severity;
@@ -45,29 +46,51 @@ public final class MarkdownReporter implements Reporter {
         Map<Severity, Integer> counts = result.countsBySeverity();
         boolean failed = !result.failing().isEmpty();
         md.append("## AtomLedger: ").append(failed ? "failed" : "passed").append("\n\n");
-        md.append(result.models().size()).append(" model(s), ")
-                .append(result.models().stream().mapToInt(m -> m.reactions().size()).sum()).append(" reactions; ")
-                .append(counts.get(Severity.ERROR)).append(" errors, ").append(counts.get(Severity.WARNING))
-                .append(" warnings, ").append(counts.get(Severity.INFO)).append(" info");
+        md.append(Wording.count(result.models().size(), "model")).append(", ")
+                .append(Wording.count(result.models().stream().mapToInt(m -> m.reactions().size()).sum(), "reaction"))
+                .append("; ").append(Wording.count(counts.get(Severity.ERROR), "error")).append(", ")
+                .append(Wording.count(counts.get(Severity.WARNING), "warning")).append(", ")
+                .append(counts.get(Severity.INFO)).append(" info");
         md.append(result.config().failOn() == null ? " (the build never fails on findings)"
                 : " (fails at " + result.config().failOn().label() + ")").append(".\n\n");
 
-        md.append("| model | reactions | element-imbalanced | charge-imbalanced | errors | warnings | info |\n");
-        md.append("|---|--:|--:|--:|--:|--:|--:|\n");
+        md.append("| model | reactions | balance-checked | element-imbalanced | charge-imbalanced | not computable (elements / charge) | errors | warnings | info |\n");
+        md.append("|---|--:|--:|--:|--:|--:|--:|--:|--:|\n");
+        List<String> notes = new java.util.ArrayList<>();
         for (ModelResult m : result.models()) {
             List<Finding> all = m.allFindings();
+            ModelCounts c = ModelCounts.of(m);
             md.append("| ").append(cell(m.file())).append(" | ").append(m.reactions().size())
-                    .append(" | ").append(ModelCounts.elementImbalanced(m))
-                    .append(" | ").append(ModelCounts.chargeImbalanced(m))
+                    .append(" | ").append(c.checked())
+                    .append(" | ").append(c.elements().imbalanced())
+                    .append(" | ").append(c.charge().imbalanced())
+                    .append(" | ").append(c.elements().notComputable()).append(" / ").append(c.charge().notComputable())
                     .append(" | ").append(count(all, Severity.ERROR)).append(" | ").append(count(all, Severity.WARNING))
                     .append(" | ").append(count(all, Severity.INFO)).append(" |\n");
+            if (!c.whyCharge().isEmpty()) {
+                notes.add(cell(m.file()) + ": charge not computable for " + Wording.count(c.charge().notComputable(), "reaction")
+                        + " (" + cell(c.whyCharge()) + ").");
+            }
+            if (!c.whyElements().isEmpty()) {
+                notes.add(cell(m.file()) + ": elements not computable for "
+                        + Wording.count(c.elements().notComputable(), "reaction") + " (" + cell(c.whyElements()) + ").");
+            }
+            for (Finding f : all) {
+                if (f.ruleId().equals("balance.common-cause")) {
+                    notes.add("Likely common cause: " + cell(f.message()));
+                }
+            }
+        }
+        if (!notes.isEmpty()) {
+            md.append('\n');
+            notes.forEach(n -> md.append("- ").append(n).append('\n'));
         }
 
         List<Finding> worst = result.allFindings().stream().sorted(WORST_FIRST).limit(MAX_FINDINGS).toList();
         int total = result.allFindings().size();
         if (!worst.isEmpty()) {
             md.append("\n### ").append(total > worst.size() ? "Worst " + worst.size() + " of " + total + " findings"
-                    : "Findings").append("\n\n");
+                    : total == 1 ? "Finding" : "Findings").append("\n\n");
             md.append("| severity | rule | element | location | message |\n");
             md.append("|---|---|---|---|---|\n");
             for (Finding f : worst) {

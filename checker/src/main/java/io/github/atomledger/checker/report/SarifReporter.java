@@ -6,6 +6,7 @@ import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.check.StandardChecks;
+import io.github.atomledger.checker.engine.ModelResult;
 import io.github.atomledger.checker.engine.RunResult;
 
 
@@ -75,6 +76,11 @@ public final class SarifReporter implements Reporter {
         run.put("originalUriBaseIds", Map.of(BASE_ID, base));
         run.put("columnKind", "unicodeCodePoints");
         run.put("results", results);
+        List<Object> models = new ArrayList<>();
+        for (ModelResult m : result.models()) {
+            models.add(obj("file", m.file(), "balance", ModelCounts.of(m).json()));
+        }
+        run.put("properties", Map.of("models", models));
 
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("$schema", SCHEMA_URI);

@@ -72,7 +72,8 @@ public final class CarbonMapText {
             Side to = side(sides[1], lineNo);
             if (from.atoms.size() != to.atoms.size()) {
                 throw new IllegalArgumentException("line " + lineNo + " of the carbon map: " + from.atoms.size()
-                        + " source atom(s) but " + to.atoms.size() + " target atom(s)");
+                        + (from.atoms.size() == 1 ? " source atom" : " source atoms") + " but " + to.atoms.size()
+                        + (to.atoms.size() == 1 ? " target atom" : " target atoms"));
             }
             for (int i = 0; i < from.atoms.size(); i++) {
                 out.add(new AtomTransition(new AtomRef(from.species, from.copy, from.atoms.get(i)),

@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.check.balance;
 
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
@@ -41,7 +42,7 @@ public final class ExemptReactionCheck implements ModelCheck {
                 continue;
             }
             Classification c = b.classification();
-            out.add(context.finding(this, r.id(), r.line(), "Reaction " + r.id() + " is a " + c.reactionClass().label()
+            out.add(context.finding(this, r.id(), r.line(), "Reaction " + r.id() + " is " + Wording.withArticle(c.reactionClass().label())
                     + " reaction (" + (c.fromSbo() != null ? "SBO term " + r.sboTerm() : c.reason())
                     + ") and is not balance-checked.",
                     Map.of("class", c.reactionClass().label(), "classSource", c.source())));

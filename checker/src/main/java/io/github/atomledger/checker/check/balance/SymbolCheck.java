@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.check.balance;
 
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.atommapper.formula.Formula;
 import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
@@ -52,7 +53,8 @@ public final class SymbolCheck implements ModelCheck {
                 continue;
             }
             out.add(context.finding(this, s.id(), s.line(), "Species " + s.id() + " has formula '" + s.formulaText()
-                    + "' with symbol(s) that are not chemical elements: " + String.join(", ", unknown)
+                    + "' with " + (unknown.size() == 1 ? "a symbol that is not a chemical element: "
+                    : "symbols that are not chemical elements: ") + String.join(", ", unknown)
                     + " (counted as pseudo-elements).",
                     Map.of("symbols", String.join(",", unknown), "formula", s.formulaText())));
         }

@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.check.consistency;
 
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.atommapper.formula.Rational;
 import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
@@ -95,8 +96,9 @@ public final class MassConsistencyCheck implements ModelCheck {
         data.put("verification", r.verification());
         data.put("undetermined", String.join(",", r.undetermined()));
         String id = context.model().modelId();
-        String message = "The internal reactions are stoichiometrically inconsistent: " + r.unconserved().size()
-                + " metabolite(s) cannot be given a conserved positive mass (" + shown(new ArrayList<>(r.unconserved()))
+        String message = "The internal reactions are stoichiometrically inconsistent: "
+                + Wording.count(r.unconserved().size(), "metabolite") + " cannot"
+                + " be given a conserved positive mass (" + shown(new ArrayList<>(r.unconserved()))
                 + "); reactions " + shown(r.causingReactions()) + " together make " + shown(describe(r.net()))
                 + " from nothing.";
         return List.of(context.finding(this, id, 0, message, data));
@@ -113,7 +115,7 @@ public final class MassConsistencyCheck implements ModelCheck {
                 ? "The stoichiometric consistency of " + r.reactions() + " internal reactions over " + r.metabolites()
                         + " metabolites could not be decided within the solver's budget of "
                         + analysis.budgetMillis() + " ms per LP."
-                : "The stoichiometric consistency of " + r.undetermined().size() + " metabolite(s) could not be proven either"
+                : "The stoichiometric consistency of " + Wording.count(r.undetermined().size(), "metabolite") + " could not be proven either"
                         + " way (" + shown(new ArrayList<>(r.undetermined())) + ").";
         return context.finding(this, context.model().modelId(), 0, message, data);
     }
@@ -134,7 +136,6 @@ public final class MassConsistencyCheck implements ModelCheck {
         if (ids.isEmpty()) {
             return "none found";
         }
-        String s = String.join(", ", ids.subList(0, Math.min(SHOWN, ids.size())));
-        return ids.size() > SHOWN ? s + ", ..." : s;
+        return Wording.shortList(ids, SHOWN);
     }
 }

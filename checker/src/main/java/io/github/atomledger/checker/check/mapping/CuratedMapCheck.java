@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.check.mapping;
 
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.atommapper.mapping.AtomTransition;
 import io.github.atomledger.checker.transitions.CarbonMapText;
 import io.github.atomledger.checker.check.CheckContext;
@@ -75,10 +76,10 @@ public final class CuratedMapCheck implements ModelCheck {
                 if (m != null) {
                     data.put("optimum", String.join("; ", CarbonMapText.format(m.carbons())));
                 }
-                String cost = v.extraCost() >= 0 ? " and needs " + v.extraCost() + " more weighted bond edit(s) than the optimum" : "";
+                String cost = v.extraCost() >= 0 ? " and needs " + Wording.count(v.extraCost(), "weighted bond edit") + " more than the optimum" : "";
                 out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
-                        + " differs from the minimum bond-edit map: " + moved.size() + " carbon(s) go elsewhere ("
-                        + String.join(", ", moved.stream().limit(6).toList()) + (moved.size() > 6 ? ", ..." : "") + ")"
+                        + " differs from the minimum bond-edit map: " + Wording.count(moved.size(), "carbon")
+                        + (moved.size() == 1 ? " goes" : " go") + " elsewhere (" + Wording.shortList(moved, 6) + ")"
                         + cost + ".", data));
             }
         }

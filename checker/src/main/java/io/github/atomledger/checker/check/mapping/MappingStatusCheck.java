@@ -98,7 +98,8 @@ public final class MappingStatusCheck implements ModelCheck {
                 case STEREO_PIN_NEEDED -> m.status() == MapStatus.MAPPED && !m.stereoNotes().isEmpty() && !curated
                         ? context.finding(this, r.id(), r.line(), "The map of reaction " + r.id()
                         + " is unique only up to a symmetry that stereochemistry breaks: " + String.join("; ", m.stereoNotes())
-                        + "; a curated map should pin it.", Map.of("notes", String.join("; ", m.stereoNotes()))) : null;
+                        + (String.join(" ", m.stereoNotes()).contains("curated") ? "." : "; a curated map should pin it."),
+                        Map.of("notes", String.join("; ", m.stereoNotes()))) : null;
             };
             if (f != null) {
                 out.add(f);
