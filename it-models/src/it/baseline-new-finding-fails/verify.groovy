@@ -12,5 +12,5 @@ assert errors.collect { [it.ruleId, it.elementId, it.baseline] }.toSorted { it.t
 assert report.summary.failed == true
 assert report.summary.gate.baseline.accepted == 2
 def log = new File(basedir, 'build.log').text
-assert log.contains("AtomLedger: 2 finding(s) at or above 'error' (4 errors, 0 warnings, 1 info): balance.charge R_ATPM, balance.elements R_ATPM")
+assert log.contains("AtomLedger: 2 findings at or above 'error' (4 errors, 0 warnings, 1 info): balance.charge (1): R_ATPM; balance.elements (1): R_ATPM")
 return true

@@ -15,5 +15,5 @@ assert elements.data == ['class': 'internal', 'delta.H': '-1', 'delta.charge': '
 assert elements.line > 0
 assert report.summary.failed == true
 def log = new File(basedir, 'build.log').text
-assert log.contains('AtomLedger: 2 finding(s) at or above \'error\'')
+assert log.contains('AtomLedger: 2 findings at or above \'error\'')
 return true

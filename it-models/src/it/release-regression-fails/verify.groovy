@@ -24,5 +24,5 @@ assert findings.any { it.ruleId == 'balance.elements' && it.elementId == 'R_G6PH
 assert report.summary.gate == [failScope: 'regressions']
 assert report.summary.failed == true
 def log = new File(basedir, 'build.log').text
-assert log.contains("AtomLedger: 2 finding(s) at or above 'error'")
+assert log.contains("AtomLedger: 2 findings at or above 'error'")
 return true

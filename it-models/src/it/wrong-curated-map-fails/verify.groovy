@@ -8,5 +8,5 @@ assert errors.collect { [it.ruleId, it.elementId] } == [['mapping.curated-differ
 assert errors[0].data.differing == 'fdp#1:6->dhap#1:2,fdp#1:19->dhap#1:5'
 assert (errors[0].data.extraCost as int) > 0
 assert fba.mapping.status == 'mapped'
-assert new File(basedir, 'build.log').text.contains('mapping.curated-differs R_FBA')
+assert new File(basedir, 'build.log').text.contains('mapping.curated-differs (1): R_FBA')
 return true

@@ -88,7 +88,7 @@ class ReleaseDiffTest {
                 "moved", "2", "now", "mapped",
                 "moved.g6p_c#1:5", "f6p_c#1:5 -> f6p_c#1:6",
                 "moved.g6p_c#1:6", "f6p_c#1:6 -> f6p_c#1:5")));
-        assertThat(pgi.message()).isEqualTo("Reaction R_PGI's carbon transitions changed: 2 carbon(s) now go elsewhere"
+        assertThat(pgi.message()).isEqualTo("Reaction R_PGI's carbon transitions changed: 2 carbons now go elsewhere"
                 + " (g6p_c#1:5 to f6p_c#1:6 instead of f6p_c#1:5; g6p_c#1:6 to f6p_c#1:5 instead of f6p_c#1:6).");
     }
 

@@ -12,6 +12,11 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import io.github.atomledger.checker.SharedData;
+import io.github.atomledger.checker.engine.Engine;
+import io.github.atomledger.checker.engine.RunConfig;
+import io.github.atomledger.checker.engine.RunListener;
+import io.github.atomledger.checker.engine.RunResult;
 import javax.imageio.ImageIO;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -101,12 +106,14 @@ class HtmlBrowserTest {
     }
 
     @Test
-    void severityFilterHidesEveryCardWithoutAnError() throws Exception {
-        // The demo has no error: with the "error" filter chosen no reaction card, so no drawing, shows.
-        String html = Files.readString(page).replace("id=\"sev-all\" class=\"radio\" checked=\"checked\"",
-                "id=\"sev-all\" class=\"radio\"").replace("id=\"sev-error\" class=\"radio\"",
-                "id=\"sev-error\" class=\"radio\" checked=\"checked\"");
-        assertThat(html).contains("id=\"sev-error\" class=\"radio\" checked=\"checked\"");
+    void filtersOfferOnlyWhatOccursAndHideCards() throws Exception {
+        // The demo has no error and no warning: no such filter is offered (issue #13). With the map-status
+        // filter "skipped" chosen, only cards without a drawing remain.
+        String html = Files.readString(page);
+        assertThat(html).doesNotContain("id=\"sev-error\"").doesNotContain("id=\"sev-warning\"").contains("id=\"sev-info\"");
+        html = html.replace("id=\"st-all\" class=\"radio\" checked=\"checked\"", "id=\"st-all\" class=\"radio\"")
+                .replace("id=\"st-skipped\" class=\"radio\"", "id=\"st-skipped\" class=\"radio\" checked=\"checked\"");
+        assertThat(html).contains("id=\"st-skipped\" class=\"radio\" checked=\"checked\"");
         Path filtered = OUT.resolve("filtered.html").toAbsolutePath();
         Files.writeString(filtered, html);
         Path png = OUT.resolve("filtered.png").toAbsolutePath();
@@ -116,6 +123,62 @@ class HtmlBrowserTest {
         BufferedImage img = ImageIO.read(png.toFile());
         // sky blue (#56B4E9) appears only in the drawings
         assertThat(pixelsNear(img, 0x56, 0xB4, 0xE9)).isZero();
+    }
+
+    // Issue #13: the first screen (1280 x 900) names what fails, before any reaction card.
+    @Test
+    void firstScreenOfThePlantedEcoliCoreNamesAtpsFormulaAsTheLikelyCause() throws Exception {
+        Path model = SharedData.require("e_coli_core.xml");
+        Path dir = OUT.resolve("ecoli");
+        Files.createDirectories(dir);
+        RunResult run = new Engine().run(RunConfig.defaults(model.getParent(), List.of(model.getFileName().toString())),
+                RunListener.SILENT);
+        new HtmlReporter().write(run, dir);
+        List<String[]> probe = firstScreen(dir.resolve("report.html"));
+        int height = Integer.parseInt(probe.get(0)[1]);
+        String[] cause = probe.stream().filter(p -> p[0].equals("P")).findFirst().orElseThrow();
+        assertThat(Integer.parseInt(cause[1])).isBetween(0, height - 40);
+        assertThat(cause[2]).contains("ATP").contains("C30H12N5O13P3").contains("C10H12N5O13P3");
+        String[] fails = probe.stream().filter(p -> p[0].equals("H2") && p[2].contains("fail the build")).findFirst().orElseThrow();
+        assertThat(fails[2]).startsWith("12 errors fail the build");
+        assertThat(Integer.parseInt(fails[1])).isBetween(0, height - 40);
+        String[] firstCard = probe.stream().filter(p -> p[0].equals("ARTICLE")).findFirst().orElseThrow();
+        assertThat(Integer.parseInt(firstCard[1])).isGreaterThan(Integer.parseInt(fails[1]));
+    }
+
+    @Test
+    void firstScreenOfTheDemoSaysNothingFails() throws Exception {
+        List<String[]> probe = firstScreen(page);
+        int height = Integer.parseInt(probe.get(0)[1]);
+        String[] verdict = probe.stream().filter(p -> p[0].equals("H2")).findFirst().orElseThrow();
+        assertThat(verdict[2]).isEqualTo("Nothing fails the build");
+        assertThat(Integer.parseInt(verdict[1])).isBetween(0, height);
+    }
+
+    /**
+     * Opens a copy of the page with a probe script (the report itself has none) and returns, for the
+     * overview's headings and causes and the first reaction cards, tag, top in CSS pixels and text;
+     * the first entry is the viewport height.
+     */
+    private static List<String[]> firstScreen(Path html) throws Exception {
+        String probe = "<script>(function(){var r=['VH|'+window.innerHeight+'|'];"
+                + "document.querySelectorAll('section.overview h2, section.overview p.cause, article.rxn').forEach("
+                + "function(e,i){if(i<30){r.push(e.tagName+'|'+Math.round(e.getBoundingClientRect().top)+'|'"
+                + "+e.textContent.replace(/\\s+/g,' ').trim().slice(0,600));}});"
+                + "var p=document.createElement('pre');p.id='probe';p.textContent=r.join('\\n');"
+                + "document.body.appendChild(p);})();</script>";
+        Path probed = html.resolveSibling("probed-" + html.getFileName());
+        Files.writeString(probed, Files.readString(html).replace("</body>", probe + "</body>"));
+        String dom = browse(probed.toAbsolutePath(), "--dump-dom", "--window-size=1280,900");
+        int start = dom.indexOf("<pre id=\"probe\">");
+        assumeTrue(start >= 0, "chromium ran no script; skipping");
+        String text = dom.substring(start + "<pre id=\"probe\">".length(), dom.indexOf("</pre>", start))
+                .replace("&amp;", "&").replace("&lt;", "<").replace("&gt;", ">").replace("&quot;", "\"");
+        List<String[]> out = new ArrayList<>();
+        for (String line : text.split("\n")) {
+            out.add(line.split("\\|", 3));
+        }
+        return out;
     }
 
     private static int count(String text, String needle) {

@@ -53,7 +53,7 @@ class HtmlReporterTest {
     @Test
     void styleSheetNeedsNoEscapingBecauseHtmlReadsStyleAsRawText() {
         String css = html.substring(html.indexOf("<style>") + 7, html.indexOf("</style>"));
-        assertThat(css).doesNotContain("&").contains("#show-idx:checked");
+        assertThat(css).doesNotContain("&").doesNotContain("<").doesNotContain(">").contains("#sev-all:checked");
     }
 
     @Test
@@ -64,7 +64,9 @@ class HtmlReporterTest {
         assertThat(html).contains("id=\"m0-R_FBA\"");
         int svgs = html.split("<svg", -1).length - 1;
         assertThat((long) svgs).as("one picture per map").isEqualTo(withMap);
-        assertThat(html).contains("class=\"annotation\"").contains("id=\"show-idx\"");
+        // Issue #13: coloured carbons carry their labels always (no toggle); unchanged cofactors are muted.
+        assertThat(html).contains("class=\"annotation\"").doesNotContain("id=\"show-idx\"");
+        assertThat(html).containsPattern("opacity=\"0\\.3\" class=\"muted (bond|atom)\"");
         assertThat(html).as("exchange reactions are not mapped").contains("Not attempted: ");
     }
 

@@ -12,7 +12,7 @@ class MarkdownReporterTest {
     void failingFixtureListsErrorsFirstAndLinksTheHtmlReport() {
         String md = new MarkdownReporter().toMarkdown(Fixtures.run("charge-gap.xml"));
         assertThat(md).startsWith("## AtomLedger: failed\n");
-        assertThat(md).contains("| charge-gap.xml | 4 | 1 | 1 | 3 | 0 | 1 |");
+        assertThat(md).contains("| charge-gap.xml | 4 | 3 | 1 | 1 | 0 / 0 | 3 | 0 | 1 |");
         int firstError = md.indexOf("| error | `balance.charge` | `R_HEX` | charge-gap.xml:20 |");
         int firstInfo = md.indexOf("\n| info |");
         assertThat(firstError).isPositive();

@@ -27,7 +27,7 @@ class CarbonMapTextTest {
     @Test
     void rejectsLinesWithUnequalAtomCountsNamingTheLine() {
         assertThatThrownBy(() -> CarbonMapText.parse("a: 1 2 = b: 1 2\n a: 3 = b: 3 4"))
-                .hasMessageContaining("line 2").hasMessageContaining("1 source atom(s) but 2 target atom(s)");
+                .hasMessageContaining("line 2").hasMessageContaining("1 source atom but 2 target atoms");
         assertThatThrownBy(() -> CarbonMapText.parse("a 1 = b: 1")).hasMessageContaining("missing ':'");
         assertThatThrownBy(() -> CarbonMapText.parse("a#0: 1 = b: 1")).hasMessageContaining("bad species, copy or atom");
     }

@@ -51,7 +51,7 @@ class CuratedMapCheckTest {
         assertThat(d.severity()).isEqualTo(Severity.ERROR);
         assertThat(d.data().get("differing")).isEqualTo("fdp#1:6->dhap#1:2,fdp#1:19->dhap#1:5");
         assertThat(Integer.parseInt(d.data().get("extraCost"))).isPositive();
-        assertThat(d.message()).contains("R_FBA_SWAPPED").contains("2 carbon(s) go elsewhere");
+        assertThat(d.message()).contains("R_FBA_SWAPPED").contains("2 carbons go elsewhere");
     }
 
     @Test
