@@ -8,7 +8,7 @@ def model = report.models[0]
 def all = model.findings + model.reactions.collectMany { it.findings }
 def table = all.findAll { it.ruleId in ['structure.invalid', 'structure.unknown-species'] }
         .collect { [it.ruleId, it.elementId, it.modelFile, it.line] }.sort { it[3] }
-assert table == [['structure.invalid', 'glc_c', 'structures.tsv', 4], ['structure.unknown-species', 'ghost_c', 'structures.tsv', 5]]
+assert table == [['structure.invalid', 'glc_c', 'structures.tsv', 4], ['structure.unknown-species', 'ghost_c', 'structures.tsv', 6]]
 assert all.find { it.ruleId == 'structure.unknown-species' }.message ==
         'The structure table names species ghost_c, which models/table_rows.xml does not define.'
 assert all.findAll { it.ruleId == 'mapping.structure-missing' }.collect { it.elementId }.sort() == ['adp_c', 'atp_c', 'h_c']
