@@ -1,6 +1,7 @@
 package io.github.atomledger.maven;
 
 import io.github.atomledger.checker.AtomLedgerException;
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.annotate.AnnotationPlan;
 import io.github.atomledger.checker.annotate.ModelAnnotator;
 import io.github.atomledger.checker.engine.Engine;
@@ -13,8 +14,6 @@ import java.io.File;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import io.github.atomledger.checker.Wording;
-
 import org.apache.maven.execution.MavenSession;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;

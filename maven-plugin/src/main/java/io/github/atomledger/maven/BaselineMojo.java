@@ -1,6 +1,7 @@
 package io.github.atomledger.maven;
 
 import io.github.atomledger.checker.AtomLedgerException;
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.baseline.Baseline;
 import io.github.atomledger.checker.baseline.BaselineEntry;
 import io.github.atomledger.checker.baseline.BaselineUpdate;
@@ -9,6 +10,7 @@ import io.github.atomledger.checker.engine.Engine;
 import io.github.atomledger.checker.engine.ModelResult;
 import io.github.atomledger.checker.engine.RunConfig;
 import io.github.atomledger.checker.engine.RunResult;
+import io.github.atomledger.checker.engine.SeverityPolicy;
 import io.github.atomledger.checker.gate.FailScope;
 import io.github.atomledger.checker.gate.Gate;
 import io.github.atomledger.checker.gate.GateConfig;
@@ -18,9 +20,6 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.util.List;
 import java.util.Map;
-import io.github.atomledger.checker.Wording;
-import io.github.atomledger.checker.engine.SeverityPolicy;
-
 import org.apache.maven.execution.MavenSession;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;

@@ -3,6 +3,12 @@ package io.github.atomledger.checker.report;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
+import io.github.atomledger.checker.SharedData;
+import io.github.atomledger.checker.engine.Engine;
+import io.github.atomledger.checker.engine.RunConfig;
+import io.github.atomledger.checker.engine.RunListener;
+import io.github.atomledger.checker.engine.RunResult;
+
 import java.awt.image.BufferedImage;
 import java.io.File;
 import java.io.IOException;
@@ -12,11 +18,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
-import io.github.atomledger.checker.SharedData;
-import io.github.atomledger.checker.engine.Engine;
-import io.github.atomledger.checker.engine.RunConfig;
-import io.github.atomledger.checker.engine.RunListener;
-import io.github.atomledger.checker.engine.RunResult;
 import javax.imageio.ImageIO;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;

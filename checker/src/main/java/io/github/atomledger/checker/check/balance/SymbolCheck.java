@@ -1,7 +1,7 @@
 package io.github.atomledger.checker.check.balance;
 
-import io.github.atomledger.checker.Wording;
 import io.github.atomledger.atommapper.formula.Formula;
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;

@@ -1,13 +1,13 @@
 package io.github.atomledger.checker.check.mapping;
 
-import io.github.atomledger.checker.Wording;
 import io.github.atomledger.atommapper.mapping.AtomTransition;
-import io.github.atomledger.checker.transitions.CarbonMapText;
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.model.ReactionInfo;
+import io.github.atomledger.checker.transitions.CarbonMapText;
 
 import java.util.ArrayList;
 import java.util.List;
