@@ -71,7 +71,10 @@ final class HtmlModel {
         x.end().nl();
     }
 
-    /** Failing cards first, then error, warning, info and clean ones; file order within each. */
+    /**
+     * Failing cards first, then error, warning, imbalanced-at-info (biomass), other info and clean
+     * ones; file order within each.
+     */
     private List<ReactionResult> ordered() {
         List<ReactionResult> out = new ArrayList<>(m.reactions());
         out.sort(Comparator.comparingInt(this::rank));
@@ -83,7 +86,16 @@ final class HtmlModel {
             return 0;
         }
         Severity worst = Families.worst(r.findings());
-        return worst == null ? 4 : 3 - worst.ordinal();
+        if (worst == null) {
+            return 5;
+        }
+        if (worst == Severity.INFO) {
+            // an imbalance reported at info (the biomass reaction) before exempt and other notes
+            boolean off = r.reactionClass().balanceComputed()
+                    && (r.balance().elementImbalanced() || r.balance().chargeImbalanced());
+            return off ? 3 : 4;
+        }
+        return worst == Severity.ERROR ? 1 : 2;
     }
 
     private boolean fails(Finding f) {
