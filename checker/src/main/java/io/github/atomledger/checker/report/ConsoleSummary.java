@@ -143,23 +143,11 @@ public final class ConsoleSummary {
             }
             String cause = explained.containsKey(f.elementId()) && f.ruleId().startsWith("balance.")
                     ? " (likely cause: " + explained.get(f.elementId()) + ")" : "";
-            out.add(new Line(level, "    " + subject + ": " + FindingWords.reason(f) + unknownElements(f, m) + cause));
+            out.add(new Line(level, "    " + subject + ": " + FindingWords.reason(f) + FindingWords.unknownElements(f, m) + cause));
         }
         if (list.size() > max) {
             out.add(new Line(level, "    and " + (list.size() - max) + " more (see report)"));
         }
-    }
-
-    /** For a charge finding on a reaction whose element balance is unknown: why it is unknown. */
-    private static String unknownElements(Finding f, ModelResult m) {
-        if (!f.ruleId().equals("balance.charge")) {
-            return "";
-        }
-        return m.reactions().stream().filter(r -> r.id().equals(f.elementId())).findFirst()
-                .filter(r -> !r.balance().elementsComputable())
-                .map(r -> "; the element balance is unknown" + (r.balance().withoutFormula().isEmpty() ? ""
-                        : ": no formula for " + Wording.shortList(r.balance().withoutFormula(), 3)))
-                .orElse("");
     }
 
     private static String lowerFirst(String s) {

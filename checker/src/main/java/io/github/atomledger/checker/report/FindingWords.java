@@ -81,6 +81,18 @@ final class FindingWords {
         };
     }
 
+    /** For a charge finding on a reaction whose element balance is unknown: why it is unknown. */
+    static String unknownElements(Finding f, ModelResult m) {
+        if (!f.ruleId().equals("balance.charge")) {
+            return "";
+        }
+        return m.reactions().stream().filter(r -> r.id().equals(f.elementId())).findFirst()
+                .filter(r -> !r.balance().elementsComputable())
+                .map(r -> "; the element balance is unknown" + (r.balance().withoutFormula().isEmpty() ? ""
+                        : ": no formula for " + Wording.shortList(r.balance().withoutFormula(), 3)))
+                .orElse("");
+    }
+
     /** Element (and with {@code charge}, charge) imbalances from {@code delta.*} data, in words. */
     private static List<String> deltas(Map<String, String> d, boolean charge) {
         List<String> out = new ArrayList<>();

@@ -152,7 +152,7 @@ final class HtmlOverview implements HtmlSection {
             Finding f = i.finding();
             x.start("li", "sev-" + f.severity().label());
             x.start("a").attr("href", "#" + i.anchor()).text(FindingWords.subject(f, i.model())).end();
-            x.text(": " + FindingWords.reason(f));
+            x.text(": " + FindingWords.reason(f) + FindingWords.unknownElements(f, i.model()));
             String who = explained.get(prefixes.get(i.model()) + "/" + f.elementId());
             if (who != null && f.ruleId().startsWith("balance.")) {
                 x.text(" ").leaf("span", "tag", "likely cause: " + who);
