@@ -37,7 +37,8 @@ import org.openscience.cdk.smiles.SmilesParser;
  * atoms in the input count as hydrogens of the formula, never as atoms of the graph. A {@code *}
  * atom is the pseudo-element "R". OpenSMILES atom classes ({@code [CH2:3]}) are read as the
  * curator's readable positions ({@link #atomLabel}: "C3"); they change nothing else (graph,
- * fingerprint, maps and mapped SMILES are the same with and without them).
+ * fingerprint, maps and mapped SMILES are the same with and without them; only texts that name
+ * atoms, such as the mapper's stereo notes, use the labels).
  *
  * <p>Thread-safety: instances are immutable. The CDK container kept inside is never handed out
  * and is copied before any CDK call that could change it. Arguments must not be null
@@ -48,9 +49,6 @@ import org.openscience.cdk.smiles.SmilesParser;
  */
 public final class Structure {
 
-    /** A bracket atom's OpenSMILES atom class: {@code :digits} just before the closing bracket. */
-    private static final java.util.regex.Pattern ATOM_CLASS = java.util.regex.Pattern.compile("\\[([^\\[\\]:]*):\\d+\\]");
-
     private final String source;
     private final Formula formula;
     private final int charge;
@@ -59,14 +57,12 @@ public final class Structure {
     private final MoleculeGraph graph;
     private final IAtomContainer master;
     private final int[] heavyToAtom;
-    private final boolean fromSmiles;
     private final int[] atomClasses;
     private final String[] labels;
 
     private Structure(String source, IAtomContainer parsed, boolean fromSmiles) throws StructureException {
         this.source = source;
         this.master = parsed;
-        this.fromSmiles = fromSmiles;
         GraphBuilder built = GraphBuilder.build(parsed, source);
         this.graph = new MoleculeGraph(built.elements(), built.neighbours(), built.bondCodes(),
                 built.orbits(), built.hydrogens());
@@ -148,15 +144,6 @@ public final class Structure {
     /** The text this structure was parsed from, unchanged. */
     public String source() {
         return source;
-    }
-
-    /**
-     * The source text without OpenSMILES atom classes ({@code [CH2:3]} becomes {@code [CH2]}): the
-     * same molecule in the same atom order, so everything computed from the graph (atom maps among
-     * them) is the same for both texts. An InChI is returned unchanged.
-     */
-    public String sourceWithoutAtomClasses() {
-        return fromSmiles && hasAtomClasses() ? ATOM_CLASS.matcher(source).replaceAll("[$1]") : source;
     }
 
     /** True when some heavy atom carries an OpenSMILES atom class. */

@@ -51,13 +51,6 @@ class AtomClassTest {
     }
 
     @Test
-    void dropsAtomClassesFromTheSourceText() throws Exception {
-        assertThat(Structure.fromSmiles(LEUCINE_NUMBERED).sourceWithoutAtomClasses())
-                .isEqualTo("[CH3][CH]([CH3])[CH2][C@H]([NH3+])[C]([O-])=O");
-        assertThat(Structure.fromSmiles(LEUCINE).sourceWithoutAtomClasses()).isEqualTo(LEUCINE);
-    }
-
-    @Test
     void aSharedClassNamesNeitherAtom() throws Exception {
         Structure s = Structure.fromSmiles("[CH3:1][C:1](=O)[O-]");
         assertThat(s.atomLabel(1)).isEqualTo("1");
@@ -92,7 +85,6 @@ class AtomClassTest {
     void anInchiHasNoAtomClasses() throws Exception {
         Structure s = Structure.fromInchi("InChI=1S/C2H4O2/c1-2(3)4/h1H3,(H,3,4)");
         assertThat(s.hasAtomClasses()).isFalse();
-        assertThat(s.sourceWithoutAtomClasses()).isEqualTo(s.source());
         assertThat(s.atomLabel(1)).isEqualTo("1");
     }
 }

@@ -141,7 +141,8 @@ public final class ConsoleSummary {
             return java.util.Optional.empty();
         }
         return java.util.Optional.of("  example " + best.id() + " carbons: "
-                + String.join("; ", io.github.atomledger.checker.transitions.CarbonMapText.format(best.mapping().carbons())));
+                + String.join("; ", io.github.atomledger.checker.transitions.CarbonMapText.format(best.mapping().carbons(),
+                m.mapping().structures()::label)));
     }
 
     static String reactionLine(ReactionResult r, List<Finding> bad) {
