@@ -26,7 +26,8 @@ import java.util.Set;
  */
 public final class Reachability {
 
-    private record Edge(Position to, Step step) {
+    /** A link to a product carbon; {@code order} is the reaction's document position (backwards just after). */
+    private record Edge(Position to, Step step, int order) {
     }
 
     private final Atoms atoms;
@@ -40,14 +41,15 @@ public final class Reachability {
             if (!seen.add(r.id())) {
                 continue;
             }
-            link(StepMap.of(new Step(r.id(), false), r, data, true));
+            int order = 2 * seen.size();
+            link(StepMap.of(new Step(r.id(), false), r, data, true), order);
             if (r.reversible()) {
-                link(StepMap.of(new Step(r.id(), true), r, data, true));
+                link(StepMap.of(new Step(r.id(), true), r, data, true), order + 1);
             }
         }
     }
 
-    private void link(StepMap m) {
+    private void link(StepMap m, int order) {
         if (m.unusable() != null) {
             return;
         }
@@ -55,10 +57,10 @@ public final class Reachability {
             table.forEach((from, tos) -> {
                 for (Position to : tos) {
                     if (m.curated()) {
-                        exact.computeIfAbsent(from, k -> new ArrayList<>()).add(new Edge(to, m.step()));
+                        exact.computeIfAbsent(from, k -> new ArrayList<>()).add(new Edge(to, m.step(), order));
                     } else {
                         Position key = new Position(from.species(), atoms.orbit(from));
-                        byClass.computeIfAbsent(key, k -> new ArrayList<>()).add(new Edge(to, m.step()));
+                        byClass.computeIfAbsent(key, k -> new ArrayList<>()).add(new Edge(to, m.step(), order));
                     }
                 }
             });
@@ -77,9 +79,10 @@ public final class Reachability {
             List<Edge> out = new ArrayList<>(exact.getOrDefault(p, List.of()));
             for (Edge e : byClass.getOrDefault(new Position(p.species(), atoms.orbit(p)), List.of())) {
                 for (Position t : atoms.orbitOf(e.to())) {
-                    out.add(new Edge(t, e.step()));
+                    out.add(new Edge(t, e.step(), e.order()));
                 }
             }
+            out.sort(Comparator.comparingInt(Edge::order).thenComparing(Edge::to));
             for (Edge e : out) {
                 if (!parent.containsKey(e.to())) {
                     parent.put(e.to(), p);
