@@ -6,11 +6,8 @@ import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.SortedSet;
-import java.util.TreeSet;
 
 /**
  * Labels and symmetry classes of species atoms, from the resolved structures; per-species results
@@ -91,29 +88,8 @@ final class Atoms {
         return structures.get(species).map(r -> r.structure().heavyAtomCount()).orElse(0);
     }
 
-    /** The atom's class for ordering labels: its atom class, or after every class when it has none. */
-    private int classOf(String species, int atom) {
-        return structures.get(species).map(r -> {
-            int c = atom <= r.structure().heavyAtomCount() ? r.structure().atomClass(atom) : 0;
-            return c > 0 ? c : Integer.MAX_VALUE;
-        }).orElse(Integer.MAX_VALUE);
-    }
-
-    /**
-     * Positions as people read them: {@code akg_c:C4}, {@code fum_c:C1/C4}, {@code co2_c:C1 or
-     * pyr_c:C1}; species in id order, labels by atom class, then atoms without one by index.
-     */
+    /** Positions as people read them; see {@link PositionText#of}. */
     String text(Collection<Position> ps) {
-        Map<String, SortedSet<Integer>> bySpecies = new LinkedHashMap<>();
-        for (Position p : new TreeSet<>(ps)) {
-            bySpecies.computeIfAbsent(p.species(), k -> new TreeSet<>()).add(p.atom());
-        }
-        List<String> parts = new ArrayList<>();
-        bySpecies.forEach((species, atoms) -> {
-            List<String> labels = atoms.stream().sorted(java.util.Comparator.comparingInt((Integer a) -> classOf(species, a))
-                    .thenComparingInt(a -> a)).map(a -> structures.label(species, a)).toList();
-            parts.add(species + ":" + String.join("/", labels));
-        });
-        return parts.isEmpty() ? "nowhere" : String.join(" or ", parts);
+        return PositionText.of(structures, ps);
     }
 }

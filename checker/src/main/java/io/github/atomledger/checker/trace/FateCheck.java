@@ -122,7 +122,7 @@ public final class FateCheck {
             }
         }
         for (CarbonTrace.Hop h : c.path()) {
-            if (t.products().get(h.index() - 1).contains(species)) {
+            if (t.steps().get(h.index() - 1).to().contains(species)) {
                 return h.index();
             }
         }

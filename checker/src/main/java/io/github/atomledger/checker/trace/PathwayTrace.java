@@ -2,7 +2,6 @@ package io.github.atomledger.checker.trace;
 
 import java.util.List;
 import java.util.Objects;
-import java.util.Set;
 
 /**
  * A pathway traced in one model: every carbon of the source, in atom order.
@@ -10,17 +9,15 @@ import java.util.Set;
  * @param pathway   the pathway
  * @param carbons   one trace per carbon of the source structure, by atom index; empty when the
  *                  pathway cannot be traced
- * @param products  per step (0-based), the species the step makes in the direction it runs
- *                  (empty for a reaction the model lacks)
+ * @param steps     how each step was taken (in order): species consumed and made, the map used
  * @param problems  why the pathway cannot be traced or has steps the model lacks; empty when fine
  */
-public record PathwayTrace(Pathway pathway, List<CarbonTrace> carbons, List<Set<String>> products,
-                           List<String> problems) {
+public record PathwayTrace(Pathway pathway, List<CarbonTrace> carbons, List<StepUse> steps, List<String> problems) {
 
     public PathwayTrace {
         Objects.requireNonNull(pathway, "pathway");
         carbons = List.copyOf(carbons);
-        products = products.stream().map(Set::copyOf).toList();
+        steps = List.copyOf(steps);
         problems = List.copyOf(problems);
     }
 

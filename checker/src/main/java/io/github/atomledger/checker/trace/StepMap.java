@@ -23,7 +23,13 @@ import java.util.Set;
  * Several tables mean co-optimal maps (ambiguous). {@code unusable} says why there is no map to use.
  */
 record StepMap(Step step, boolean present, Set<String> from, Set<String> to, String unusable,
-               List<Map<Position, List<Position>>> tables, boolean curated, List<String> stereoNotes) {
+               List<Map<Position, List<Position>>> tables, boolean curated, List<String> stereoNotes,
+               List<AtomTransition> used) {
+
+    /** What a report shows of this step. */
+    StepUse use() {
+        return new StepUse(step, present, from, to, curated, unusable, used);
+    }
 
     static StepMap of(Step step, ReactionInfo reaction, MappingData data) {
         return of(step, reaction, data, false);
@@ -34,7 +40,8 @@ record StepMap(Step step, boolean present, Set<String> from, Set<String> to, Str
      */
     static StepMap of(Step step, ReactionInfo reaction, MappingData data, boolean bestFoundToo) {
         if (reaction == null) {
-            return new StepMap(step, false, Set.of(), Set.of(), "is not a reaction of the model", List.of(), false, List.of());
+            return new StepMap(step, false, Set.of(), Set.of(), "is not a reaction of the model", List.of(), false, List.of(),
+                    List.of());
         }
         Set<String> reactants = species(reaction.reactants());
         Set<String> products = species(reaction.products());
@@ -47,7 +54,8 @@ record StepMap(Step step, boolean present, Set<String> from, Set<String> to, Str
             if (!verdict.valid()) {
                 return unusable(step, from, to, "has a curated map that is not a valid carbon map (mapping.curated-invalid)");
             }
-            return new StepMap(step, true, from, to, null, List.of(table(stored.carbons(), step.backwards())), true, List.of());
+            return new StepMap(step, true, from, to, null, List.of(table(stored.carbons(), step.backwards())), true, List.of(),
+                    stored.carbons());
         }
         ReactionMapping m = data.mappings().get(id);
         if (m == null) {
@@ -55,14 +63,15 @@ record StepMap(Step step, boolean present, Set<String> from, Set<String> to, Str
         }
         return switch (m.status()) {
             case BEST_FOUND -> bestFoundToo
-                    ? new StepMap(step, true, from, to, null, List.of(table(m.carbons(), step.backwards())), false, m.stereoNotes())
+                    ? new StepMap(step, true, from, to, null, List.of(table(m.carbons(), step.backwards())), false,
+                    m.stereoNotes(), m.carbons())
                     : unusable(step, from, to, "has only the best map found within the time budget (cost "
                     + m.cost() + ", proven lower bound " + m.lowerBound() + "), not a proven one");
             case MAPPED, AMBIGUOUS -> {
                 List<Map<Position, List<Position>>> tables = new ArrayList<>();
                 tables.add(table(m.carbons(), step.backwards()));
                 m.alternatives().forEach(a -> tables.add(table(a, step.backwards())));
-                yield new StepMap(step, true, from, to, null, tables, false, m.stereoNotes());
+                yield new StepMap(step, true, from, to, null, tables, false, m.stereoNotes(), m.carbons());
             }
             default -> unusable(step, from, to, "has no atom map (" + m.status().label()
                     + (m.reason().isEmpty() ? "" : ": " + m.reason()) + ")");
@@ -70,7 +79,7 @@ record StepMap(Step step, boolean present, Set<String> from, Set<String> to, Str
     }
 
     private static StepMap unusable(Step step, Set<String> from, Set<String> to, String why) {
-        return new StepMap(step, true, from, to, why, List.of(), false, List.of());
+        return new StepMap(step, true, from, to, why, List.of(), false, List.of(), List.of());
     }
 
     private static Set<String> species(List<Participant> side) {

@@ -59,13 +59,13 @@ public final class Tracer {
     /** Traces every carbon of the pathway's source; a pathway that cannot be traced says why. */
     public PathwayTrace trace(Pathway pathway) {
         List<StepMap> maps = new ArrayList<>();
-        List<Set<String>> products = new ArrayList<>();
+        List<StepUse> uses = new ArrayList<>();
         List<String> problems = new ArrayList<>();
         for (int i = 0; i < pathway.steps().size(); i++) {
             Step s = pathway.steps().get(i);
             StepMap m = steps.computeIfAbsent(s, k -> StepMap.of(k, reactions.get(k.reactionId()), data));
             maps.add(m);
-            products.add(m.to());
+            uses.add(m.use());
             if (!m.present()) {
                 problems.add("step " + (i + 1) + ", " + s.reactionId() + ", is not a reaction of the model");
             }
@@ -73,18 +73,18 @@ public final class Tracer {
         String source = pathway.source();
         if (model.species(source).isEmpty()) {
             problems.add(0, "the source " + source + " is not a species of the model");
-            return new PathwayTrace(pathway, List.of(), products, problems);
+            return new PathwayTrace(pathway, List.of(), uses, problems);
         }
         List<Integer> carbons = atoms.carbons(source);
         if (atoms.atomCount(source) == 0) {
             problems.add(0, "the source " + source + " has no structure");
-            return new PathwayTrace(pathway, List.of(), products, problems);
+            return new PathwayTrace(pathway, List.of(), uses, problems);
         }
         List<CarbonTrace> out = new ArrayList<>();
         for (int atom : carbons) {
             out.add(follow(source, atom, maps));
         }
-        return new PathwayTrace(pathway, out, products, problems);
+        return new PathwayTrace(pathway, out, uses, problems);
     }
 
     private CarbonTrace follow(String source, int atom, List<StepMap> maps) {
