@@ -121,6 +121,10 @@ final class HtmlTraces {
         if (use.curated()) {
             x.text(" ").leaf("span", "tag", "curated map");
         }
+        Optional<String> equation = equation(use);
+        if (equation.isPresent()) {
+            x.text(" ").leaf("span", "moves", "(" + equation.get() + ")");
+        }
         List<String> moved = keys.keySet().stream().map(t::carbon).filter(c -> c.path().stream().anyMatch(h -> h.index() == i))
                 .map(c -> s.label(t.pathway().source(), c.atom())).toList();
         x.text(" ").leaf("span", "moves", moved.isEmpty() ? "moves no followed carbon" : "moves " + String.join(" ", moved));
@@ -137,6 +141,8 @@ final class HtmlTraces {
                     x.start("figure", "tpic");
                     SvgEmbed.copy(svg.get(), id + "-s" + i + "-", x.writer());
                     x.end().nl();
+                } else if (moved.isEmpty()) {
+                    x.leaf("p", "nomap", "Not drawn: no followed carbon passes this step.").nl();
                 } else {
                     x.leaf("p", "nomap", "Not drawn: a structure of this step is missing.").nl();
                 }
@@ -146,6 +152,14 @@ final class HtmlTraces {
             }
         }
         x.end().nl();
+    }
+
+    /** The reaction as written, by species names: {@code L-leucine + 2-oxoglutarate → ...}. */
+    private Optional<String> equation(StepUse use) {
+        return m.model().reactions().stream().filter(r -> r.id().equals(use.step().reactionId())).findFirst()
+                .map(r -> String.join(" + ", r.reactants().stream().map(p -> TraceSummary.name(m.model(), p.species())).toList())
+                        + (r.reversible() ? " \u21cc " : " \u2192 ")
+                        + String.join(" + ", r.products().stream().map(p -> TraceSummary.name(m.model(), p.species())).toList()));
     }
 
     private void safeText(String text) {

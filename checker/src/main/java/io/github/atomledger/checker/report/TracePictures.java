@@ -29,6 +29,8 @@ import java.util.TreeSet;
  * the step consumes on the left, the ones it makes on the right, each source carbon in its own
  * colour key with its label on the atoms that carry it before and after the step (every copy of a
  * species and every equivalent atom, since the trace cannot tell them apart), the rest muted.
+ * Only molecules that carry a followed carbon are drawn; the report names the other participants.
+ * A step that moves no followed carbon is not drawn.
  */
 final class TracePictures {
 
@@ -85,7 +87,27 @@ final class TracePictures {
         if (left == null || right == null) {
             return Optional.empty();
         }
-        return Optional.of(TracedStepPicture.of(r.id(), left, right).svg());
+        List<TracedStepPicture.Molecule> shownLeft = carriers(left);
+        List<TracedStepPicture.Molecule> shownRight = carriers(right);
+        if (shownLeft.isEmpty() && shownRight.isEmpty()) {
+            return Optional.empty();
+        }
+        java.util.Set<Integer> shownNumbers = new java.util.HashSet<>();
+        shownLeft.forEach(mol -> java.util.Arrays.stream(mol.mapNumbers()).forEach(shownNumbers::add));
+        List<TracedStepPicture.Molecule> alignedRight = new ArrayList<>();
+        for (TracedStepPicture.Molecule mol : shownRight) {
+            int[] n = mol.mapNumbers();
+            for (int i = 0; i < n.length; i++) {
+                n[i] = shownNumbers.contains(n[i]) ? n[i] : 0;
+            }
+            alignedRight.add(new TracedStepPicture.Molecule(mol.structure(), mol.title(), n, mol.keys(), mol.labels()));
+        }
+        return Optional.of(TracedStepPicture.of(r.id(), shownLeft, alignedRight).svg());
+    }
+
+    /** The molecules that carry a followed carbon: the others (cofactors, co-substrates) are listed, not drawn. */
+    private static List<TracedStepPicture.Molecule> carriers(List<TracedStepPicture.Molecule> side) {
+        return side.stream().filter(mol -> java.util.Arrays.stream(mol.keys()).anyMatch(k -> k > 0)).toList();
     }
 
     private static List<TracedStepPicture.Molecule> side(ModelResult m, List<Participant> participants,

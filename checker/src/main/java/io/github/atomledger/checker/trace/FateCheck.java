@@ -92,20 +92,27 @@ public final class FateCheck {
             return new FateOutcome(e, FateOutcome.Verdict.UNDECIDED, label, actual, c.lastMove(),
                     stepText(t, c.lastMove()), c.reason());
         }
-        int part = partingStep(t, c, e.species(), position);
-        return new FateOutcome(e, FateOutcome.Verdict.DIFFERS, label, actual, part, stepText(t, part), "");
+        Parting part = parting(t, c, e.species(), position);
+        return new FateOutcome(e, FateOutcome.Verdict.DIFFERS, label, actual, part.step(), stepText(t, part.step()),
+                part.hint());
     }
 
     private static boolean matches(Position p, String species, int position) {
         return p.species().equals(species) && (position == 0 || p.atom() == position);
     }
 
+    /** Where actual and expected part: the 1-based step (0: the carbon never moved) and a hint, "" when none. */
+    record Parting(int step, String hint) {
+    }
+
     /**
      * The first step where actual and expected part: the step that moved the carbon away after it
      * last sat where expected; else the first step that moved it and makes the expected species;
-     * else the step of its fate (0 when it never moved).
+     * else the first later step that has the carbon's species on the side it makes (it does not
+     * take the carbon up: most likely it should run backwards); else the step of its fate, where
+     * it went into a species no later step consumes (0 when it never moved).
      */
-    static int partingStep(PathwayTrace t, CarbonTrace c, String species, int position) {
+    static Parting parting(PathwayTrace t, CarbonTrace c, String species, int position) {
         String source = t.pathway().source();
         int lastThere = -1;
         for (int k = 0; k <= t.pathway().steps().size(); k++) {
@@ -117,16 +124,28 @@ public final class FateCheck {
         if (lastThere >= 0) {
             for (CarbonTrace.Hop h : c.path()) {
                 if (h.index() > lastThere) {
-                    return h.index();
+                    return new Parting(h.index(), "");
                 }
             }
         }
         for (CarbonTrace.Hop h : c.path()) {
             if (t.steps().get(h.index() - 1).to().contains(species)) {
-                return h.index();
+                return new Parting(h.index(), "");
             }
         }
-        return c.lastMove();
+        Set<String> where = new java.util.TreeSet<>();
+        c.positions().keySet().forEach(p -> where.add(p.species()));
+        for (int j = c.lastMove() + 1; j <= t.steps().size(); j++) {
+            StepUse u = t.steps().get(j - 1);
+            for (String w : where) {
+                if (u.to().contains(w) && !u.from().contains(w)) {
+                    Step reversed = new Step(u.step().reactionId(), !u.step().backwards());
+                    return new Parting(j, u.step().reactionId() + " makes " + w + " instead of consuming it (write "
+                            + reversed.text() + " to run it the other way)");
+                }
+            }
+        }
+        return new Parting(c.lastMove(), "");
     }
 
     private static String stepText(PathwayTrace t, int step) {
@@ -186,9 +205,13 @@ public final class FateCheck {
                     data.put("actual", o.actual());
                     data.put("step", o.stepText());
                     data.put("stepIndex", Integer.toString(o.step()));
+                    if (!o.detail().isEmpty()) {
+                        data.put("hint", o.detail());
+                    }
                     out.add(finding(model, DIFFERS, source, head + "carbon " + o.carbon() + " of " + source + " ends in "
                             + o.actual() + ", not in " + e.fateText() + " as expected (" + e.where() + "); "
-                            + (step.isEmpty() ? "it never leaves " + source : "they part at " + step) + ".", data));
+                            + (step.isEmpty() ? "it never leaves " + source : "they part at " + step)
+                            + (o.detail().isEmpty() ? "" : ": " + o.detail()) + ".", data));
                 }
             }
         }

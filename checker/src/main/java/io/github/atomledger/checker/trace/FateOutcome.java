@@ -12,7 +12,7 @@ import java.util.Objects;
  * @param step        1-based step where actual and expected part (differs) or the step that left
  *                    the carbon undecided; 0 when none
  * @param stepText    that step as written ({@code -R_X}), "" when none
- * @param detail      one clause: why it is undecided or invalid ("" otherwise)
+ * @param detail      one clause: why it is undecided or invalid, or a hint where it differs ("" otherwise)
  */
 public record FateOutcome(FateExpectation expectation, Verdict verdict, String carbon, String actual, int step,
                           String stepText, String detail) {

@@ -18,6 +18,8 @@ import java.util.TreeMap;
  * Follows every carbon of a pathway's source through its steps, using the model's own maps. The
  * rules (also in {@code docs/traces.md}):
  * <ul>
+ *   <li>The followed carbons are those the source's structure numbers with atom classes, or all
+ *   of its carbons when it numbers none.</li>
  *   <li>At each step, a followed carbon that sits in a species the step consumes (its reactants,
  *   or its products when the step runs backwards) moves to the atom the step's map sends it to;
  *   carbons elsewhere stay (one that left as CO2 or in a side product stays there, unless a later
@@ -75,16 +77,28 @@ public final class Tracer {
             problems.add(0, "the source " + source + " is not a species of the model");
             return new PathwayTrace(pathway, List.of(), uses, problems);
         }
-        List<Integer> carbons = atoms.carbons(source);
         if (atoms.atomCount(source) == 0) {
             problems.add(0, "the source " + source + " has no structure");
             return new PathwayTrace(pathway, List.of(), uses, problems);
         }
+        List<Integer> carbons = followed(source);
         List<CarbonTrace> out = new ArrayList<>();
         for (int atom : carbons) {
             out.add(follow(source, atom, maps));
         }
         return new PathwayTrace(pathway, out, uses, problems);
+    }
+
+    /**
+     * The carbons followed: those the source's structure numbers with atom classes (numbering a
+     * carbon is how a curator says it matters, and it keeps the CoA of an acyl-CoA out of the
+     * way), or every carbon when none is numbered.
+     */
+    private List<Integer> followed(String source) {
+        List<Integer> all = atoms.carbons(source);
+        var structure = data.structures().get(source).orElseThrow().structure();
+        List<Integer> numbered = all.stream().filter(a -> structure.atomClass(a) > 0).toList();
+        return numbered.isEmpty() ? all : numbered;
     }
 
     private CarbonTrace follow(String source, int atom, List<StepMap> maps) {

@@ -17,6 +17,7 @@ class FateCheckTest {
             pathway("refixed", "a", "R1 R2 R6"),
             pathway("stalled", "a", "R5"),
             pathway("ambiguous", "b", "R3"),
+            pathway("wrongway", "a", "R1 R6"),
             pathway("symmetric", "m", "-R7 R7"));
 
     private static Pathway pathway(String name, String source, String steps) {
@@ -62,6 +63,9 @@ class FateCheckTest {
         assertThat(only("refixed C1 co2").step()).as("was in CO2, left at step 3").isEqualTo(3);
         assertThat(only("decarboxylation C1 d").step()).as("d is never made: the fate's step").isEqualTo(2);
         assertThat(only("stalled C1 co2").step()).as("never moved").isZero();
+        FateOutcome wrongWay = only("wrongway C1 co2");
+        assertThat(wrongWay.step()).as("R6 makes b, where the carbon sits, instead of consuming it").isEqualTo(2);
+        assertThat(wrongWay.detail()).isEqualTo("R6 makes b instead of consuming it (write -R6 to run it the other way)");
     }
 
     @Test
