@@ -52,6 +52,18 @@ final class HtmlTraces {
             .st-undecided{color:#8a5a00}.st-split{color:var(--mute)}
             """;
 
+    /** The severity and rule filters apply to pathways as to reaction cards (by their trace findings). */
+    static String filters(List<String> severities, List<String> rules) {
+        StringBuilder css = new StringBuilder();
+        for (String prefix : new String[] {"sev", "rule"}) {
+            for (String v : prefix.equals("sev") ? severities : rules) {
+                String id = prefix + "-" + v;
+                css.append("#").append(id).append(":checked ~ main div.pathway:not(.").append(id).append("){display:none}\n");
+            }
+        }
+        return css.toString();
+    }
+
     private final XmlOut x;
     private final ModelResult m;
     private final String idPrefix;
@@ -91,7 +103,9 @@ final class HtmlTraces {
     private void pathway(PathwayTrace t, String id) throws XMLStreamException {
         List<FateOutcome> outcomes = m.traces().outcomes(t.pathway().name());
         boolean fails = !t.problems().isEmpty() || outcomes.stream().anyMatch(o -> o.verdict() != FateOutcome.Verdict.HOLDS);
-        x.start("div", "pathway" + (fails ? " fails" : "")).attr("id", id).nl();
+        List<io.github.atomledger.checker.check.Finding> findings = m.modelFindings().stream()
+                .filter(TraceConsole::isTrace).filter(f -> t.pathway().name().equals(f.data().get("pathway"))).toList();
+        x.start("div", "pathway " + HtmlReporter.filterClasses(findings) + (fails ? " fails" : "")).attr("id", id).nl();
         x.start("h4").text("Pathway " + t.pathway().name());
         x.text(" ").leaf("span", "tag", "source " + t.pathway().source() + " (" + TraceSummary.name(m.model(), t.pathway().source()) + ")");
         x.text(" ").leaf("span", "tag", t.pathway().steps().size() + " steps");
