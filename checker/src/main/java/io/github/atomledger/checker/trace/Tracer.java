@@ -82,6 +82,10 @@ public final class Tracer {
             return new PathwayTrace(pathway, List.of(), uses, problems);
         }
         List<Integer> carbons = followed(source);
+        if (carbons.isEmpty()) {
+            problems.add(0, "the source " + source + " has no carbon");
+            return new PathwayTrace(pathway, List.of(), uses, problems);
+        }
         List<CarbonTrace> out = new ArrayList<>();
         for (int atom : carbons) {
             out.add(follow(source, atom, maps));

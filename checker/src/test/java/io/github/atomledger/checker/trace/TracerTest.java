@@ -129,5 +129,8 @@ class TracerTest {
                 "", "f", 1));
         assertThat(t.carbons()).isEmpty();
         assertThat(t.problems()).containsExactly("the source zz is not a species of the model");
+        Synthetic water = model().species("w", "O");
+        assertThat(new Tracer(water.model(), water.data()).trace(new Pathway("p", "w", java.util.List.of(new Step("R1", false)),
+                "", "f", 1)).problems()).containsExactly("the source w has no carbon");
     }
 }
