@@ -141,7 +141,11 @@ final class HtmlTraces {
         }
         List<String> moved = keys.keySet().stream().map(t::carbon).filter(c -> c.path().stream().anyMatch(h -> h.index() == i))
                 .map(c -> s.label(t.pathway().source(), c.atom())).toList();
-        x.text(" ").leaf("span", "moves", moved.isEmpty() ? "moves no followed carbon" : "moves " + String.join(" ", moved));
+        List<String> stopped = keys.keySet().stream().map(t::carbon).filter(c -> c.stopStep() == i)
+                .map(c -> s.label(t.pathway().source(), c.atom())).toList();
+        x.text(" ").leaf("span", "moves", (moved.isEmpty() ? stopped.isEmpty() ? "moves no followed carbon" : ""
+                : "moves " + String.join(" ", moved)) + (stopped.isEmpty() ? "" : (moved.isEmpty() ? "" : "; ")
+                + "leaves " + String.join(" ", stopped) + " undecided"));
         x.end().nl();
         if (use.unusable() != null) {
             x.leaf("p", "nomap", "Not drawn: " + use.step().reactionId() + " " + use.unusable() + ".").nl();
@@ -155,7 +159,7 @@ final class HtmlTraces {
                     x.start("figure", "tpic");
                     SvgEmbed.copy(svg.get(), id + "-s" + i + "-", x.writer());
                     x.end().nl();
-                } else if (moved.isEmpty()) {
+                } else if (moved.isEmpty() && stopped.isEmpty()) {
                     x.leaf("p", "nomap", "Not drawn: no followed carbon passes this step.").nl();
                 } else {
                     x.leaf("p", "nomap", "Not drawn: a structure of this step is missing.").nl();
