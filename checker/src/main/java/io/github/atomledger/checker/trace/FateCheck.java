@@ -31,6 +31,13 @@ public final class FateCheck {
     /** The rule ids with their default severities. */
     public static final Map<String, Severity> RULES = rules();
 
+    /** One line of user documentation per rule id. */
+    public static final Map<String, String> DESCRIPTIONS = Map.of(
+            DIFFERS, "A declared carbon fate does not hold: the carbon ends elsewhere.",
+            UNDECIDED, "The atom maps do not say where the carbon of a declared fate ends.",
+            EXPECTATION_INVALID, "A declared fate names a carbon, species or position that does not exist.",
+            PATHWAY_INVALID, "A pathway's source or steps are missing from the model, or its source has no structure.");
+
     private static Map<String, Severity> rules() {
         Map<String, Severity> m = new LinkedHashMap<>();
         m.put(DIFFERS, Severity.ERROR);
