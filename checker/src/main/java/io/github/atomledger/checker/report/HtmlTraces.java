@@ -23,7 +23,8 @@ import javax.xml.stream.XMLStreamException;
  * A model's carbon traces in the HTML report: per pathway its steps drawn in order (each source
  * carbon keeps one colour and its label from the first step to its fate, carbons not followed are
  * muted) beside a table of fates with the declared expectations; then, per label source, where
- * label can go. A drawing that fails is named in the page and the report goes on.
+ * label can go. Pathways fold (the first one and failing ones open). A drawing that fails is named in
+ * the page and the report goes on.
  */
 final class HtmlTraces {
 
@@ -36,9 +37,10 @@ final class HtmlTraces {
     static final String STYLE = """
             section.traces{margin:14px 0 22px}
             section.traces h3{font-size:16px;margin:12px 0 4px}
-            div.pathway{background:#fff;border:1px solid var(--line);border-left:6px solid var(--info);border-radius:3px;margin:10px 0;padding:8px 14px}
-            div.pathway.fails{border-left-color:var(--err)}
-            div.pathway h4{margin:0 0 2px;font-size:15px;display:flex;flex-wrap:wrap;gap:8px;align-items:baseline}
+            details.pathway{background:#fff;border:1px solid var(--line);border-left:6px solid var(--info);border-radius:3px;margin:10px 0;padding:8px 14px}
+            details.pathway.fails{border-left-color:var(--err)}
+            details.pathway summary{color:var(--ink);font-size:14px}
+            details.pathway h4{margin:0 0 2px;font-size:15px;display:inline-flex;flex-wrap:wrap;gap:8px;align-items:baseline}
             .tlayout{display:grid;grid-template-columns:minmax(0,1fr) minmax(280px,36%);gap:16px;align-items:start}
             ol.tsteps{margin:4px 0;padding-left:24px}
             ol.tsteps li{margin:4px 0 10px}
@@ -58,7 +60,7 @@ final class HtmlTraces {
         for (String prefix : new String[] {"sev", "rule"}) {
             for (String v : prefix.equals("sev") ? severities : rules) {
                 String id = prefix + "-" + v;
-                css.append("#").append(id).append(":checked ~ main div.pathway:not(.").append(id).append("){display:none}\n");
+                css.append("#").append(id).append(":checked ~ main details.pathway:not(.").append(id).append("){display:none}\n");
             }
         }
         return css.toString();
@@ -68,6 +70,7 @@ final class HtmlTraces {
     private final ModelResult m;
     private final String idPrefix;
     private final int[] budget;
+    private int open;
 
     HtmlTraces(XmlOut x, ModelResult m, String idPrefix, int[] budget) {
         this.x = x;
@@ -105,13 +108,18 @@ final class HtmlTraces {
         boolean fails = !t.problems().isEmpty() || outcomes.stream().anyMatch(o -> o.verdict() != FateOutcome.Verdict.HOLDS);
         List<io.github.atomledger.checker.check.Finding> findings = m.modelFindings().stream()
                 .filter(TraceConsole::isTrace).filter(f -> t.pathway().name().equals(f.data().get("pathway"))).toList();
-        x.start("div", "pathway " + HtmlReporter.filterClasses(findings) + (fails ? " fails" : "")).attr("id", id).nl();
-        x.start("h4").text("Pathway " + t.pathway().name());
+        x.start("details", "pathway " + HtmlReporter.filterClasses(findings) + (fails ? " fails" : "")).attr("id", id);
+        // The first pathway and every failing one are open; the others fold, so the reaction cards stay near.
+        if (fails || open == 0) {
+            x.attr("open", "open");
+        }
+        open++;
+        x.nl().start("summary").start("h4").text("Pathway " + t.pathway().name());
         x.text(" ").leaf("span", "tag", "source " + t.pathway().source() + " (" + TraceSummary.name(m.model(), t.pathway().source()) + ")");
         x.text(" ").leaf("span", "tag", t.pathway().steps().size() + " steps");
         x.text(" ").leaf("span", "tag", t.pathway().where());
-        x.end().nl();
-        x.leaf("p", "sub", TraceSummary.line(m.model(), m.traces(), t)).nl();
+        x.end();
+        x.leaf("p", "sub", TraceSummary.line(m.model(), m.traces(), t)).end().nl();
         Map<Integer, Integer> keys = TracePictures.keys(m, t);
         x.start("div", "tlayout").nl();
         x.start("ol", "tsteps").nl();

@@ -96,7 +96,7 @@ class HtmlBrowserTest {
                 .contains("Where label can go");
         int start = dom.indexOf("<section class=\"traces\"");
         String traces = dom.substring(start, dom.indexOf("</section>", start));
-        assertThat(count(traces, "<div class=\"pathway")).isEqualTo(5);
+        assertThat(count(traces, "<details class=\"pathway")).isEqualTo(5);
         assertThat(count(traces, "<table class=\"fates\"")).isEqualTo(5);
         assertThat(count(traces, "<figure class=\"tpic\"")).isGreaterThanOrEqualTo(25);
         assertThat(count(traces, "<svg")).isEqualTo(count(traces, "<figure class=\"tpic\""));
