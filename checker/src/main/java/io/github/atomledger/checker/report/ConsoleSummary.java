@@ -86,6 +86,10 @@ public final class ConsoleSummary {
                 out.add(new Line(Level.INFO, "  " + mappingLine(m)));
                 example(m).ifPresent(e -> out.add(new Line(Level.INFO, e)));
             }
+            // Pathway traces (their failing fates under the pathway, at ERROR).
+            for (String t : TraceConsole.lines(result, m, Families.threshold(result))) {
+                out.add(new Line(t.startsWith("    [") ? Level.ERROR : Level.INFO, t));
+            }
             findings(result, m, colour, out);
         }
         return out;
@@ -99,12 +103,15 @@ public final class ConsoleSummary {
         Map<String, List<Finding>> warnings = new TreeMap<>();
         List<Finding> causes = new ArrayList<>();
         int accepted = 0;
+        int tracesFailing = 0; // listed under their pathway by TraceConsole
         for (Finding f : all) {
             boolean fails = result.config().failOn() != null && f.severity().atLeast(threshold) && result.gate().mayFail(f);
             if (!fails && result.gate().status(f).filter(s -> s == BaselineStatus.ACCEPTED).isPresent()) {
                 accepted++;
             } else if (f.ruleId().equals("balance.common-cause")) {
                 causes.add(f);
+            } else if (fails && TraceConsole.isTrace(f)) {
+                tracesFailing++;
             } else if (fails) {
                 failing.computeIfAbsent(f.ruleId(), k -> new ArrayList<>()).add(f);
             } else if (f.severity() != Severity.INFO) {
@@ -117,7 +124,7 @@ public final class ConsoleSummary {
             group("balance.common-cause", causes, m, Map.of(), MAX_PER_FAILING_RULE, fails ? Level.ERROR : Level.WARNING,
                     colour, out);
         }
-        int failingCount = failing.values().stream().mapToInt(List::size).sum();
+        int failingCount = failing.values().stream().mapToInt(List::size).sum() + tracesFailing;
         if (failingCount > 0) {
             out.add(new Line(Level.ERROR, "  " + (threshold == Severity.ERROR ? Wording.count(failingCount, "error")
                     : Wording.count(failingCount, "finding") + " at " + threshold.label() + " or above") + " "
@@ -204,11 +211,11 @@ public final class ConsoleSummary {
             return Optional.empty();
         }
         List<String> parts = new ArrayList<>();
-        for (String group : CarbonMapText.format(best.mapping().carbons())) {
+        for (String group : CarbonMapText.format(best.mapping().carbons(), m.mapping().structures()::label)) {
             parts.add(spell(group, m));
         }
         return Optional.of("  example " + best.id() + FindingWords.name(best.id(), m).map(n -> " (" + n + ")").orElse("")
-                + ", carbons by atom number in each species' structure: " + String.join("; ", parts));
+                + ", carbons by position in each species' structure: " + String.join("; ", parts));
     }
 
     /** {@code "co2_c: 2 = oaa_c: 2"} as {@code "CO2 2 → oxaloacetate 2"}; a second copy is "(2nd)". */

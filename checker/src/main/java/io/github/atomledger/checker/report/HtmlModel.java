@@ -35,6 +35,7 @@ final class HtmlModel {
     private final String idPrefix;
     private final int[] pictureBudget;
     private final RunResult run;
+    private final int[] traceBudget = {HtmlTraces.MAX_STEP_PICTURES};
 
     HtmlModel(XmlOut x, ModelResult m, Map<String, MapPicture> maps, String idPrefix, int[] pictureBudget, RunResult run) {
         this.pictureBudget = pictureBudget;
@@ -59,6 +60,7 @@ final class HtmlModel {
             section.write(x, m, idPrefix);
         }
         modelFindings();
+        new HtmlTraces(x, m, idPrefix, traceBudget).write();
         Map<String, SpeciesChemistry> chemistry = BalanceTable.chemistry(m.model());
         for (ReactionResult r : ordered()) {
             MapPicture map = maps.get(r.id());

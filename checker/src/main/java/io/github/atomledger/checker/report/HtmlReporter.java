@@ -108,8 +108,9 @@ public final class HtmlReporter implements Reporter {
             x.empty("meta").attr("name", "viewport").attr("content", "width=device-width, initial-scale=1").nl();
             x.empty("meta").attr("name", "generator").attr("content", "AtomLedger " + Version.get()).nl();
             x.leaf("title", null, "AtomLedger report").nl();
-            x.start("style").text(HtmlStyle.BASE).text(HtmlStyle.filters(severityTokens, ruleTokens, statusTokens))
-                    .end().nl();
+            x.start("style").text(HtmlStyle.BASE).text(HtmlTraces.STYLE)
+                    .text(HtmlStyle.filters(severityTokens, ruleTokens, statusTokens))
+                    .text(HtmlTraces.filters(severityTokens, ruleTokens)).end().nl();
             x.end().nl();
             x.start("body").nl();
             header(x, result);

@@ -88,9 +88,26 @@ class HtmlBrowserTest {
         assumeTrue(!dom.isBlank(), "chromium printed no DOM; skipping the browser test");
         assertThat(dom).contains("AtomLedger report").contains("reactions by class").contains("findings by severity")
                 .contains("atom maps");
-        assertThat(count(dom, "<article")).isEqualTo(43);
+        assertThat(count(dom, "<article")).isEqualTo(64);
         assertThat(count(dom, "<svg")).isGreaterThanOrEqualTo(20);
         assertThat(dom).contains("R_FBA").contains("fructose-bisphosphate aldolase");
+    }
+
+    @Test
+    void browserBuildsThePathwaySectionWithItsStepsAndFates() throws Exception {
+        // Issue #14: a section per pathway with its steps drawn in order beside a table of fates.
+        String dom = browse("--dump-dom");
+        assumeTrue(!dom.isBlank(), "chromium printed no DOM; skipping the browser test");
+        assertThat(dom).contains("Carbon traces").contains("Pathway leucine").contains("Pathway phenylalanine")
+                .contains("Where label can go");
+        int start = dom.indexOf("<section class=\"traces\"");
+        String traces = dom.substring(start, dom.indexOf("</section>", start));
+        assertThat(count(traces, "<details class=\"pathway")).isEqualTo(5);
+        assertThat(count(traces, "<table class=\"fates\"")).isEqualTo(5);
+        assertThat(count(traces, "<figure class=\"tpic\"")).isGreaterThanOrEqualTo(25);
+        assertThat(count(traces, "<svg")).isEqualTo(count(traces, "<figure class=\"tpic\""));
+        assertThat(traces).contains("holds").doesNotContain("differs").doesNotContain("Not drawn: the drawing");
+        assertThat(traces.indexOf("R_LEUTA")).isLessThan(traces.indexOf("R_BCKDH")).isLessThan(traces.indexOf("R_HMGCL"));
     }
 
     @Test
@@ -108,13 +125,13 @@ class HtmlBrowserTest {
 
     @Test
     void filtersOfferOnlyWhatOccursAndHideCards() throws Exception {
-        // The demo has no error and no warning: no such filter is offered (issue #13). With the map-status
-        // filter "skipped" chosen, only cards without a drawing remain.
+        // The demo has no error and no warning: no such filter is offered (issue #13). With the rule filter
+        // balance.exempt chosen, only exchange cards remain (never drawn), and the pathways fold away.
         String html = Files.readString(page);
         assertThat(html).doesNotContain("id=\"sev-error\"").doesNotContain("id=\"sev-warning\"").contains("id=\"sev-info\"");
-        html = html.replace("id=\"st-all\" class=\"radio\" checked=\"checked\"", "id=\"st-all\" class=\"radio\"")
-                .replace("id=\"st-skipped\" class=\"radio\"", "id=\"st-skipped\" class=\"radio\" checked=\"checked\"");
-        assertThat(html).contains("id=\"st-skipped\" class=\"radio\" checked=\"checked\"");
+        html = html.replace("id=\"rule-all\" class=\"radio\" checked=\"checked\"", "id=\"rule-all\" class=\"radio\"")
+                .replace("id=\"rule-balance_exempt\" class=\"radio\"", "id=\"rule-balance_exempt\" class=\"radio\" checked=\"checked\"");
+        assertThat(html).contains("id=\"rule-balance_exempt\" class=\"radio\" checked=\"checked\"");
         Path filtered = OUT.resolve("filtered.html").toAbsolutePath();
         Files.writeString(filtered, html);
         Path png = OUT.resolve("filtered.png").toAbsolutePath();

@@ -6,6 +6,7 @@ import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.model.ReactionInfo;
 import io.github.atomledger.checker.transitions.CarbonMapText;
 
@@ -66,8 +67,11 @@ public final class CuratedMapCheck implements ModelCheck {
             } else if (!validity && v.valid() && !v.agrees() && !v.differing().isEmpty()) {
                 Map<String, String> data = new TreeMap<>();
                 List<String> moved = new ArrayList<>();
+                List<String> named = new ArrayList<>();
+                SpeciesStructures structures = context.mapping().structures();
                 for (AtomTransition t : v.differing()) {
                     moved.add(t.from() + "->" + t.to());
+                    named.add(structures.name(t.from()) + "->" + structures.name(t.to()));
                 }
                 data.put("differing", String.join(",", moved));
                 data.put("differingCount", Integer.toString(moved.size()));
@@ -79,7 +83,7 @@ public final class CuratedMapCheck implements ModelCheck {
                 String cost = v.extraCost() >= 0 ? " and needs " + Wording.count(v.extraCost(), "weighted bond edit") + " more than the optimum" : "";
                 out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
                         + " differs from the minimum bond-edit map: " + Wording.count(moved.size(), "carbon")
-                        + (moved.size() == 1 ? " goes" : " go") + " elsewhere (" + Wording.shortList(moved, 6) + ")"
+                        + (moved.size() == 1 ? " goes" : " go") + " elsewhere (" + Wording.shortList(named, 6) + ")"
                         + cost + ".", data));
             }
         }
