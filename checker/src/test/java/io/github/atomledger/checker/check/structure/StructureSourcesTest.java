@@ -2,15 +2,20 @@ package io.github.atomledger.checker.check.structure;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static io.github.atomledger.checker.SourceFixtures.ADP;
+import static io.github.atomledger.checker.SourceFixtures.ATP;
+import static io.github.atomledger.checker.SourceFixtures.PEP;
+import static io.github.atomledger.checker.SourceFixtures.PYRUVIC_ACID;
+import static io.github.atomledger.checker.SourceFixtures.molfile;
+import static io.github.atomledger.checker.SourceFixtures.record;
 
-import io.github.atomledger.atommapper.structure.Structure;
 import io.github.atomledger.checker.AtomLedgerException;
+import io.github.atomledger.checker.SourceFixtures;
 import io.github.atomledger.checker.TestModels;
 import io.github.atomledger.checker.model.ModelView;
 
 import java.io.IOException;
 import java.io.OutputStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
@@ -30,41 +35,15 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class StructureSourcesTest {
 
-    static final String PEP = "C=C(OP([O-])([O-])=O)C([O-])=O";
-    static final String ATP = "Nc1ncnc2n(cnc12)[C@@H]1O[C@H](COP([O-])(=O)OP([O-])(=O)OP([O-])([O-])=O)[C@@H](O)[C@H]1O";
-    static final String ADP = "Nc1ncnc2n(cnc12)[C@@H]1O[C@H](COP([O-])(=O)OP([O-])([O-])=O)[C@@H](O)[C@H]1O";
-    static final String PYRUVIC_ACID = "CC(=O)C(O)=O";
-    static final String PYRUVATE = "CC(=O)C([O-])=O";
-
     @TempDir
     Path dir;
 
-    static String molfile(String smiles) {
-        try {
-            Structure s = Structure.fromSmiles(smiles);
-            return s.toMolfile("", new int[s.heavyAtomCount()]);
-        } catch (Exception e) {
-            throw new AssertionError(e);
-        }
-    }
-
-    /** An SD record in the ChEBI dump's layout. */
-    static String record(String chebiId, String molfile, String name) {
-        return molfile + "> <ChEBI ID>\n" + chebiId + "\n\n> <ChEBI Name>\n" + name + "\n\n$$$$\n";
-    }
-
     private Path write(String name, String text) throws IOException {
-        Path p = dir.resolve(name);
-        Files.createDirectories(p.getParent());
-        Files.writeString(p, text, StandardCharsets.UTF_8);
-        return p;
+        return SourceFixtures.write(dir, name, text);
     }
 
     private Path chebiSd() throws IOException {
-        return write("chebi.sdf", record("CHEBI:58702", molfile(PEP), "phosphoenolpyruvate")
-                + record("CHEBI:30616", molfile(ATP), "ATP(4-)")
-                + record("CHEBI:32816", molfile(PYRUVIC_ACID), "pyruvic acid")
-                + record("CHEBI:15361", molfile(PYRUVATE), "pyruvate"));
+        return SourceFixtures.chebiSd(dir);
     }
 
     private StructureLibrary library(Path... files) {
