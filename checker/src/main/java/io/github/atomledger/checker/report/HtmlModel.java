@@ -36,7 +36,9 @@ final class HtmlModel {
         x.text(" ").leaf("span", "tag", "SBML L" + m.model().level() + "V" + m.model().version()
                 + (m.model().fbcVersion() > 0 ? " fbc v" + m.model().fbcVersion() : ""));
         x.end().nl();
-        cards();
+        HtmlCoverage coverage = new HtmlCoverage(x, m);
+        cards(coverage);
+        coverage.details();
         modelFindings();
         Map<String, SpeciesChemistry> chemistry = BalanceTable.chemistry(m.model());
         for (ReactionResult r : m.reactions()) {
@@ -50,7 +52,7 @@ final class HtmlModel {
         x.end().nl();
     }
 
-    private void cards() throws XMLStreamException {
+    private void cards(HtmlCoverage coverage) throws XMLStreamException {
         List<Finding> all = m.allFindings();
         x.start("div", "cards").nl();
 
@@ -85,6 +87,8 @@ final class HtmlModel {
             table(st, null);
             x.end().nl();
         }
+
+        coverage.card();
 
         x.start("div", "card").leaf("h3", null, "findings by rule");
         table(HtmlReporter.countBy(all.stream().map(Finding::ruleId).toList()), all.isEmpty() ? "none" : null);
