@@ -202,14 +202,13 @@ public final class CheckMojo extends AbstractMojo {
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
         List<Path> written;
+        List<String> exported;
         try {
             Engine engine = new Engine();
             MavenRunListener listener = new MavenRunListener(getLog());
             result = Gate.standard(engine, config.maxModelBytes()).apply(engine.run(config, listener), gate, listener);
             written = Reporters.forFormats(config.formats()).write(result, config.reportDirectory());
-            if (exportMaps) {
-                ConfigMapper.exportMaps(result, config.reportDirectory().resolve("maps"), getLog());
-            }
+            exported = exportMaps ? ConfigMapper.exportMaps(result, config.reportDirectory().resolve("maps")) : List.of();
         } catch (AtomLedgerException e) {
             throw new MojoExecutionException(e.getMessage(), e);
         } catch (IOException e) {
@@ -223,6 +222,13 @@ public final class CheckMojo extends AbstractMojo {
         }
         for (Path p : written) {
             getLog().info("report: " + ConfigMapper.display(config.baseDirectory(), p));
+        }
+        for (String line : exported) {
+            if (line.startsWith("!")) {
+                getLog().warn(line.substring(1));
+            } else {
+                getLog().info(line);
+            }
         }
         if (!result.failing().isEmpty()) {
             throw new MojoFailureException(ConfigMapper.failureSummary(result, written, config.baseDirectory()));

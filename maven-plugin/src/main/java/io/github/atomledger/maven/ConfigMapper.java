@@ -143,16 +143,17 @@ final class ConfigMapper {
         return out;
     }
 
-    /** Writes the run's maps as RXN files and a transition table, and says so in the log. */
-    static void exportMaps(RunResult result, Path directory, org.apache.maven.plugin.logging.Log log) throws IOException {
+    /** Writes the run's maps as RXN files and a transition table; returns what to log (warnings prefixed "!"). */
+    static List<String> exportMaps(RunResult result, Path directory) throws IOException {
         if (result.models().stream().noneMatch(m -> m.mapping().enabled())) {
-            log.warn("AtomLedger: exportMaps is set but mapping is off (set structures or mapping=on): no maps to export");
-            return;
+            return List.of("!exportMaps is set but mapping is off (set structures or mapping=on): no maps to export");
         }
         MapExport.Written w = MapExport.write(result, directory);
-        log.info("maps: " + w.inferred() + " inferred and " + w.curated() + " curated map(s) written as RXN files to "
-                + ConfigMapper.display(result.config().baseDirectory(), directory));
-        w.failed().forEach(f -> log.warn("maps: not exported: " + f));
+        List<String> lines = new ArrayList<>();
+        lines.add("maps: " + w.inferred() + " inferred and " + w.curated() + " curated map(s) written as RXN files to "
+                + display(result.config().baseDirectory(), directory));
+        w.failed().forEach(f -> lines.add("!maps: not exported: " + f));
+        return lines;
     }
 
     /** The directory of curated RXN maps, which must exist, or null. */

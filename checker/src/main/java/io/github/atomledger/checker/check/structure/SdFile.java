@@ -38,7 +38,8 @@ import java.util.TreeMap;
  * directory is given, stores the index (record numbers, lines, byte offsets, ids) under
  * {@code <cache>/sd-index/}, keyed by the file's absolute path, size, modification time and the
  * id field; later runs read the index and fetch only the records their species need (by seeking
- * in a plain file, by one decompressing pass for gzip). Records that cannot be used (no
+ * in a plain file, by one decompressing pass for gzip, whose records are then kept beside the
+ * index so that the next run need not decompress again). Records that cannot be used (no
  * {@code M  END}, no id) are kept as problems. Thread-safe.
  */
 public final class SdFile implements StructureFile {
@@ -46,9 +47,14 @@ public final class SdFile implements StructureFile {
     /** The default data item holding the id. */
     public static final String DEFAULT_ID_FIELD = "ChEBI ID";
 
-    private static final String MAGIC = "atomledger-sd-index-1";
+    private static final String MAGIC = "atomledger-sd-index-2";
 
     private record Rec(int number, long line, long offset, long length) {
+    }
+
+    /** One record of the index: where it is, its id values and their cross-references (as text, "" for none). */
+    private record Indexed(int number, long line, long offset, long length, String problem, List<String> values,
+                           List<String> references) {
     }
 
     private final String display;
@@ -56,31 +62,43 @@ public final class SdFile implements StructureFile {
     private final boolean gzip;
     private final Map<Integer, Rec> records = new HashMap<>();
     private final Map<String, Integer> bySpecies = new HashMap<>();
-    private final Map<CrossReference, Integer> byReference = new HashMap<>();
+    private final Map<String, Integer> byReference = new HashMap<>();
     private final List<SpeciesStructures.Problem> problems = new ArrayList<>();
     private final Map<Integer, String> texts = new HashMap<>();
     private final boolean fromCache;
+    /** Where records read from a gzip file are kept for later runs, or null. */
+    private final Path recordCache;
 
-    private SdFile(String display, Path path, boolean gzip, String field, List<SdFileScanner.Record> scanned,
-                   boolean fromCache) {
+    private SdFile(String display, Path path, boolean gzip, List<Indexed> index, boolean fromCache, Path recordCache) {
         this.display = display;
         this.path = path;
         this.gzip = gzip;
         this.fromCache = fromCache;
-        String prefix = CrossReference.prefixNamed(field).orElse(null);
-        for (SdFileScanner.Record r : scanned) {
+        this.recordCache = recordCache;
+        for (Indexed r : index) {
             if (r.problem() != null) {
                 problems.add(new SpeciesStructures.Problem("", "unusable-record", SpeciesStructures.Source.SD_FILE, display,
                         r.problem(), (int) Math.min(Integer.MAX_VALUE, r.line()), origin(r.number(), r.line())));
                 continue;
             }
             records.put(r.number(), new Rec(r.number(), r.line(), r.offset(), r.length()));
-            for (String v : r.values()) {
-                bySpecies.putIfAbsent(v, r.number());
-                Optional<CrossReference> x = prefix != null ? CrossReference.of(prefix, v) : CrossReference.fromName(v);
-                x.ifPresent(ref -> byReference.putIfAbsent(ref, r.number()));
+            for (int i = 0; i < r.values().size(); i++) {
+                bySpecies.putIfAbsent(r.values().get(i), r.number());
+                if (!r.references().get(i).isEmpty()) {
+                    byReference.putIfAbsent(r.references().get(i), r.number());
+                }
             }
         }
+    }
+
+    /** The id values of a scanned record with their cross-references, read once when the file is indexed. */
+    private static Indexed indexed(SdFileScanner.Record r, String prefix) {
+        List<String> refs = new ArrayList<>();
+        for (String v : r.values()) {
+            Optional<CrossReference> x = prefix != null ? CrossReference.of(prefix, v) : CrossReference.fromName(v);
+            refs.add(x.map(CrossReference::toString).orElse(""));
+        }
+        return new Indexed(r.number(), r.line(), r.offset(), r.length(), r.problem(), r.values(), refs);
     }
 
     /**
@@ -93,20 +111,23 @@ public final class SdFile implements StructureFile {
         try {
             boolean gzip = StructureFiles.isGzip(path);
             Path index = cacheDirectory == null ? null : indexFile(path, idField, cacheDirectory);
+            Path recordCache = index == null || !gzip ? null
+                    : index.resolveSibling(index.getFileName().toString().replace(".idx", ".records"));
             if (index != null && Files.isRegularFile(index)) {
-                List<SdFileScanner.Record> cached = readIndex(index);
+                List<Indexed> cached = readIndex(index);
                 if (cached != null) {
-                    return new SdFile(display, path, gzip, idField, cached, true);
+                    return new SdFile(display, path, gzip, cached, true, recordCache);
                 }
             }
-            List<SdFileScanner.Record> scanned = new ArrayList<>();
+            String prefix = CrossReference.prefixNamed(idField).orElse(null);
+            List<Indexed> scanned = new ArrayList<>();
             try (InputStream in = StructureFiles.open(path)) {
-                SdFileScanner.scan(in, idField, scanned::add);
+                SdFileScanner.scan(in, idField, r -> scanned.add(indexed(r, prefix)));
             }
             if (index != null) {
                 writeIndex(index, scanned);
             }
-            return new SdFile(display, path, gzip, idField, scanned, false);
+            return new SdFile(display, path, gzip, scanned, false, recordCache);
         } catch (IOException e) {
             throw new AtomLedgerException(display + ": cannot read the SD file: " + e.getMessage(), e);
         }
@@ -143,7 +164,7 @@ public final class SdFile implements StructureFile {
 
     @Override
     public Optional<Entry> reference(CrossReference reference) {
-        return Optional.ofNullable(byReference.get(reference)).map(this::entry);
+        return Optional.ofNullable(byReference.get(reference.toString())).map(this::entry);
     }
 
     private Entry entry(int number) {
@@ -161,7 +182,7 @@ public final class SdFile implements StructureFile {
         TreeMap<Long, Rec> wanted = new TreeMap<>();
         for (Entry e : entries) {
             Rec r = records.get(Integer.parseInt(e.key()));
-            if (r != null && !texts.containsKey(r.number())) {
+            if (r != null && !texts.containsKey(r.number()) && !fromRecordCache(r)) {
                 wanted.put(r.offset(), r);
             }
         }
@@ -170,13 +191,14 @@ public final class SdFile implements StructureFile {
         }
         try {
             if (gzip) {
+                // A gzip stream cannot seek: one pass, skipping to each wanted record in order.
                 try (InputStream in = StructureFiles.open(path)) {
                     long at = 0;
                     for (Rec r : wanted.values()) {
                         in.skipNBytes(r.offset() - at);
                         byte[] bytes = in.readNBytes((int) r.length());
                         at = r.offset() + bytes.length;
-                        texts.put(r.number(), SdFileScanner.molfilePart(new String(bytes, StandardCharsets.UTF_8)));
+                        keep(r, SdFileScanner.molfilePart(new String(bytes, StandardCharsets.UTF_8)));
                     }
                 }
             } else {
@@ -185,13 +207,45 @@ public final class SdFile implements StructureFile {
                         byte[] bytes = new byte[(int) r.length()];
                         file.seek(r.offset());
                         file.readFully(bytes);
-                        texts.put(r.number(), SdFileScanner.molfilePart(new String(bytes, StandardCharsets.UTF_8)));
+                        keep(r, SdFileScanner.molfilePart(new String(bytes, StandardCharsets.UTF_8)));
                     }
                 }
             }
         } catch (IOException e) {
             throw new AtomLedgerException(display + ": cannot read records of the SD file (changed since it was indexed?): "
                     + e.getMessage(), e);
+        }
+    }
+
+    private boolean fromRecordCache(Rec r) {
+        if (recordCache == null) {
+            return false;
+        }
+        Path f = recordCache.resolve(r.number() + ".mol");
+        try {
+            if (Files.isRegularFile(f)) {
+                texts.put(r.number(), Files.readString(f, StandardCharsets.UTF_8));
+                return true;
+            }
+        } catch (IOException e) {
+            // Read it from the SD file instead.
+        }
+        return false;
+    }
+
+    private void keep(Rec r, String text) {
+        texts.put(r.number(), text);
+        if (recordCache == null) {
+            return;
+        }
+        try {
+            Files.createDirectories(recordCache);
+            Path tmp = Files.createTempFile(recordCache, "record", ".tmp");
+            Files.writeString(tmp, text, StandardCharsets.UTF_8);
+            Files.move(tmp, recordCache.resolve(r.number() + ".mol"), StandardCopyOption.REPLACE_EXISTING,
+                    StandardCopyOption.ATOMIC_MOVE);
+        } catch (IOException e) {
+            // A record that cannot be kept is read from the SD file next time.
         }
     }
 
@@ -215,22 +269,24 @@ public final class SdFile implements StructureFile {
         }
     }
 
-    private static void writeIndex(Path index, List<SdFileScanner.Record> records) {
+    private static void writeIndex(Path index, List<Indexed> records) {
         try {
             Files.createDirectories(index.getParent());
             Path tmp = Files.createTempFile(index.getParent(), "index", ".tmp");
             try (DataOutputStream out = new DataOutputStream(new BufferedOutputStream(Files.newOutputStream(tmp), 1 << 16))) {
                 out.writeUTF(MAGIC);
                 out.writeInt(records.size());
-                for (SdFileScanner.Record r : records) {
+                for (Indexed r : records) {
                     out.writeInt(r.number());
                     out.writeLong(r.line());
                     out.writeLong(r.offset());
                     out.writeLong(r.length());
                     out.writeUTF(r.problem() == null ? "" : r.problem());
                     out.writeShort(Math.min(r.values().size(), Short.MAX_VALUE));
-                    for (String v : r.values().subList(0, Math.min(r.values().size(), Short.MAX_VALUE))) {
+                    for (int i = 0; i < Math.min(r.values().size(), Short.MAX_VALUE); i++) {
+                        String v = r.values().get(i);
                         out.writeUTF(v.length() > 10_000 ? v.substring(0, 10_000) : v);
+                        out.writeUTF(r.references().get(i));
                     }
                 }
             }
@@ -245,13 +301,13 @@ public final class SdFile implements StructureFile {
     }
 
     /** The records of a stored index, or null when it is damaged (it is then rebuilt). */
-    private static List<SdFileScanner.Record> readIndex(Path index) {
+    private static List<Indexed> readIndex(Path index) {
         try (DataInputStream in = new DataInputStream(new BufferedInputStream(Files.newInputStream(index), 1 << 16))) {
             if (!MAGIC.equals(in.readUTF())) {
                 return null;
             }
             int n = in.readInt();
-            List<SdFileScanner.Record> out = new ArrayList<>(n);
+            List<Indexed> out = new ArrayList<>(n);
             for (int i = 0; i < n; i++) {
                 int number = in.readInt();
                 long line = in.readLong();
@@ -260,10 +316,12 @@ public final class SdFile implements StructureFile {
                 String problem = in.readUTF();
                 int values = in.readShort();
                 List<String> v = new ArrayList<>(values);
+                List<String> refs = new ArrayList<>(values);
                 for (int k = 0; k < values; k++) {
                     v.add(in.readUTF());
+                    refs.add(in.readUTF());
                 }
-                out.add(new SdFileScanner.Record(number, line, offset, length, v, problem.isEmpty() ? null : problem));
+                out.add(new Indexed(number, line, offset, length, problem.isEmpty() ? null : problem, v, refs));
             }
             return out;
         } catch (IOException | RuntimeException e) {
