@@ -51,6 +51,9 @@ final class HtmlCoverage {
             return;
         }
         x.start("details", "coverage");
+        if (c.missing().size() + c.generic().size() <= SHOWN) {
+            x.attr("open", "open");
+        }
         x.leaf("summary", null, c.missing().size() + " missing structure(s), ranked by the reactions each would unblock; "
                 + c.generic().size() + " generic or polymer species").nl();
         if (!c.missing().isEmpty()) {

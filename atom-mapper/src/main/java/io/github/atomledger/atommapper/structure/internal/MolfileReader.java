@@ -125,6 +125,10 @@ public final class MolfileReader {
         String counts = lines.get(3);
         int atoms = number(counts, 0, 3, "atom count of the counts line", 4);
         int bonds = number(counts, 3, 6, "bond count of the counts line", 4);
+        if (atoms < 0 || bonds < 0) {
+            throw new StructureException("the counts line announces " + atoms + " atom(s) and " + bonds
+                    + " bond(s); counts cannot be negative", 4, null);
+        }
         int needed = 4 + atoms + bonds;
         if (lines.size() < needed) {
             throw new StructureException("molfile ends at line " + lines.size() + " but its counts line announces "
@@ -201,6 +205,10 @@ public final class MolfileReader {
                 }
                 atoms = Integer.parseInt(t[1]);
                 bonds = Integer.parseInt(t[2]);
+                if (atoms < 0 || bonds < 0) {
+                    throw new StructureException("COUNTS announces " + atoms + " atom(s) and " + bonds
+                            + " bond(s); counts cannot be negative", first + 1, null);
+                }
             } else if (section.equals("ATOM")) {
                 if (t.length < 5 || !isInteger(t[0]) || !isNumber(t[2]) || !isNumber(t[3]) || !isNumber(t[4])) {
                     throw new StructureException("atom line needs an index, a type and x, y, z: '" + shorten(l) + "'",
