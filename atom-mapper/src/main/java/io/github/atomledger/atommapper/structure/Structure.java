@@ -57,13 +57,9 @@ public final class Structure {
     private final int[] heavyToAtom;
 
     private Structure(String source, IAtomContainer parsed) throws StructureException {
-        this(source, source, parsed);
-    }
-
-    private Structure(String source, String label, IAtomContainer parsed) throws StructureException {
         this.source = source;
         this.master = parsed;
-        GraphBuilder built = GraphBuilder.build(parsed, label);
+        GraphBuilder built = GraphBuilder.build(parsed, source);
         this.graph = new MoleculeGraph(built.elements(), built.neighbours(), built.bondCodes(),
                 built.orbits(), built.hydrogens());
         this.heavyToAtom = built.heavyToAtom();
@@ -146,8 +142,14 @@ public final class Structure {
     public static Structure fromMolfile(String molfile) throws StructureException {
         Objects.requireNonNull(molfile, "molfile");
         IAtomContainer mol = io.github.atomledger.atommapper.structure.internal.MolfileReader.read(molfile);
-        String name = molfile.lines().findFirst().orElse("").strip();
-        return new Structure(molfile, "molfile" + (name.isEmpty() ? "" : " '" + name + "'"), mol);
+        try {
+            return new Structure(molfile, mol);
+        } catch (StructureException e) {
+            // The graph's messages quote the source text; a molfile is named by its first line instead.
+            String name = molfile.lines().findFirst().orElse("").strip();
+            throw new StructureException(String.valueOf(e.getMessage()).replace(molfile,
+                    "molfile" + (name.isEmpty() ? "" : " " + name)), e);
+        }
     }
 
     /**
