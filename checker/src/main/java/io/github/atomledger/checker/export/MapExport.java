@@ -26,6 +26,11 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.stream.Stream;
 
 /**
@@ -93,48 +98,29 @@ public final class MapExport {
             Files.createDirectories(dir);
             StringBuilder tsv = new StringBuilder("reaction\torigin\tstatus\tfrom_species\tfrom_copy\tfrom_atom\tfrom_label"
                     + "\tto_species\tto_copy\tto_atom\tto_label\n");
+            // Layout and molfile writing cost milliseconds per reaction: prepared on the run's mapping
+            // threads, written in document order.
+            List<Callable<Prepared>> jobs = new ArrayList<>();
             for (ReactionResult r : m.reactions()) {
-                Chosen c = choose(r, m.mapping());
-                if (c == null) {
+                jobs.add(() -> prepare(r, m));
+            }
+            for (Prepared p : all(jobs, Math.max(1, result.config().mapping().threads()))) {
+                if (p == null) {
                     continue;
                 }
-                ReactionInput input = MappingInputs.inputOf(r.reaction(), r.balance(), m.mapping().structures()).orElse(null);
-                if (input == null) {
+                if (p.failure() != null) {
+                    failed.add(m.file() + " " + p.id() + ": " + p.failure());
                     continue;
                 }
-                List<AtomTransition> atoms = c.carbons();
-                String comment = "origin=" + c.origin() + (c.status().isEmpty() ? "" : " status=" + c.status())
-                        + (c.cost() >= 0 ? " cost=" + c.cost() : "");
-                if (!c.smiles().isEmpty()) {
-                    List<AtomTransition> all = MappedSmiles.atomMap(input, c.smiles()).orElse(null);
-                    atoms = all != null ? all : atoms;
-                    comment += all != null ? " atoms=heavy" : " atoms=carbon";
-                } else {
-                    comment += " atoms=carbon";
-                }
-                String text;
-                try {
-                    text = RxnMaps.write(r.id(), comment, input, atoms);
-                } catch (StructureException | RuntimeException e) {
-                    failed.add(m.file() + " " + r.id() + ": " + e.getMessage());
-                    continue;
-                }
-                Path f = dir.resolve(r.id() + ".rxn");
-                Files.writeString(f, text, StandardCharsets.UTF_8);
+                Path f = dir.resolve(p.id() + ".rxn");
+                Files.writeString(f, p.rxn(), StandardCharsets.UTF_8);
                 files.add(f);
-                if (c.origin().equals(TransitionAnnotation.CURATED)) {
+                if (p.curated()) {
                     curated++;
                 } else {
                     inferred++;
                 }
-                Labels labels = new Labels(input);
-                for (AtomTransition t : c.carbons()) {
-                    tsv.append(r.id()).append('\t').append(c.origin()).append('\t').append(c.status()).append('\t')
-                            .append(t.from().species()).append('\t').append(t.from().copy()).append('\t')
-                            .append(t.from().atom()).append('\t').append(labels.of(t.from(), true)).append('\t')
-                            .append(t.to().species()).append('\t').append(t.to().copy()).append('\t')
-                            .append(t.to().atom()).append('\t').append(labels.of(t.to(), false)).append('\n');
-                }
+                tsv.append(p.rows());
             }
             Path table = dir.resolve(TRANSITIONS);
             Files.writeString(table, tsv.toString(), StandardCharsets.UTF_8);
@@ -144,6 +130,66 @@ public final class MapExport {
     }
 
     private record Chosen(String origin, String status, int cost, List<AtomTransition> carbons, String smiles) {
+    }
+
+    /** One reaction's file text and table rows, or why it could not be written; null when it has no map. */
+    private record Prepared(String id, boolean curated, String rxn, String rows, String failure) {
+    }
+
+    private static Prepared prepare(ReactionResult r, ModelResult m) {
+        Chosen c = choose(r, m.mapping());
+        if (c == null) {
+            return null;
+        }
+        ReactionInput input = MappingInputs.inputOf(r.reaction(), r.balance(), m.mapping().structures()).orElse(null);
+        if (input == null) {
+            return null;
+        }
+        List<AtomTransition> atoms = c.carbons();
+        String comment = "origin=" + c.origin() + (c.status().isEmpty() ? "" : " status=" + c.status())
+                + (c.cost() >= 0 ? " cost=" + c.cost() : "");
+        List<AtomTransition> all = c.smiles().isEmpty() ? null : MappedSmiles.atomMap(input, c.smiles()).orElse(null);
+        atoms = all != null ? all : atoms;
+        comment += all != null ? " atoms=heavy" : " atoms=carbon";
+        String text;
+        try {
+            text = RxnMaps.write(r.id(), comment, input, atoms);
+        } catch (StructureException | RuntimeException e) {
+            return new Prepared(r.id(), false, "", "", String.valueOf(e.getMessage()));
+        }
+        Labels labels = new Labels(input);
+        StringBuilder rows = new StringBuilder();
+        for (AtomTransition t : c.carbons()) {
+            rows.append(r.id()).append('\t').append(c.origin()).append('\t').append(c.status()).append('\t')
+                    .append(t.from().species()).append('\t').append(t.from().copy()).append('\t')
+                    .append(t.from().atom()).append('\t').append(labels.of(t.from(), true)).append('\t')
+                    .append(t.to().species()).append('\t').append(t.to().copy()).append('\t')
+                    .append(t.to().atom()).append('\t').append(labels.of(t.to(), false)).append('\n');
+        }
+        return new Prepared(r.id(), c.origin().equals(TransitionAnnotation.CURATED), text, rows.toString(), null);
+    }
+
+    /** Runs the jobs on {@code threads} threads; results in job order. */
+    private static List<Prepared> all(List<Callable<Prepared>> jobs, int threads) throws IOException {
+        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "atomledger-export");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            List<Prepared> out = new ArrayList<>();
+            for (Future<Prepared> f : pool.invokeAll(jobs)) {
+                out.add(f.get());
+            }
+            return out;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IOException("the map export was interrupted", e);
+        } catch (ExecutionException e) {
+            throw new IOException("the map export failed: " + e.getCause(), e.getCause());
+        } finally {
+            pool.shutdownNow();
+        }
     }
 
     /** The curated map when it is valid, else the inferred one when there is one, else null. */
