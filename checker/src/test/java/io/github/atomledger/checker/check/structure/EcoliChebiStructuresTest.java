@@ -73,9 +73,11 @@ class EcoliChebiStructuresTest {
         assertThat(statuses).containsEntry(MapStatus.MAPPED, 50);
         assertThat(c.missing()).extracting(Coverage.Missing::species).startsWith("M_mal__L_c", "M_ru5p__D_c");
 
-        ModelResult viaTable = run(TestModels.fixture("structure/sources/chebi-central.tsv"));
-        assertThat(viaTable.mapping().structures().bySpecies().keySet()).isEqualTo(found.keySet());
-        found.forEach((id, r) -> assertThat(viaTable.mapping().structures().get(id).orElseThrow().structure().fingerprint())
+        Path table = TestModels.fixture("structure/sources/chebi-central.tsv");
+        SpeciesStructures viaTable = new StructureResolver().resolve(m.model(),
+                StructureLibrary.load(List.of(table), table.getParent(), SdFile.DEFAULT_ID_FIELD, null), Map.of());
+        assertThat(viaTable.bySpecies().keySet()).isEqualTo(found.keySet());
+        found.forEach((id, r) -> assertThat(viaTable.get(id).orElseThrow().structure().fingerprint())
                 .as(id).isEqualTo(r.structure().fingerprint()));
     }
 }
