@@ -66,7 +66,7 @@ public final class GenericSpeciesCheck implements ModelCheck {
         data.put("blockedOnlyByGeneric", Integer.toString(c.blockedByGenericOnly()));
         String message = c.generic().size() + " generic or polymer species take part in mappable-class reactions and "
                 + "have no single structure (" + c.blockedByGenericOnly() + " reaction(s) wait only on them): " + shown
-                + (c.generic().size() > listed ? ", ..." : "") + ".";
+                + (c.generic().size() > listed ? " and " + (c.generic().size() - listed) + " more" : "") + ".";
         return List.of(context.finding(this, context.model().modelId(), 0, message, data));
     }
 }

@@ -77,7 +77,7 @@ public final class StructureMissingCheck implements ModelCheck {
         data.put("considered", Integer.toString(c.considered()));
         String message = c.missing().size() + " species have no structure, which keeps " + blockedByMissing.size()
                 + " of " + c.considered() + " mappable-class reactions from being mapped; the ones that unblock most: "
-                + shown + (c.missing().size() > listed ? ", ..." : "") + ".";
+                + shown + (c.missing().size() > listed ? " and " + (c.missing().size() - listed) + " more" : "") + ".";
         return List.of(context.finding(this, context.model().modelId(), 0, message, data));
     }
 }
