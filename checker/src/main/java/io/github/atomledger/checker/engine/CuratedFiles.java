@@ -88,7 +88,13 @@ final class CuratedFiles {
                 out.put(id, unusable(id, shown, "nothing to check the map against: " + why, 0));
                 continue;
             }
-            RxnMaps.Reading reading = RxnMaps.onto(rxn, input);
+            RxnMaps.Reading reading;
+            try {
+                reading = RxnMaps.onto(rxn, input);
+            } catch (RuntimeException e) {
+                out.put(id, unusable(id, shown, "the file's molecules could not be matched to the reaction: " + e, 0));
+                continue;
+            }
             List<String> problems = reading.problems().stream().map(p -> shown + ": " + p).toList();
             out.put(id, new ImportedMap(id, shown, reading.carbons(), problems, "", 0));
         }
