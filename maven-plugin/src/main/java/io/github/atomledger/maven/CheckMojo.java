@@ -183,6 +183,33 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.maxHeavyAtoms", defaultValue = "400")
     private int maxHeavyAtoms;
 
+    /**
+     * Pathways whose carbons are followed (see {@code docs/traces.md}): a TSV file with a header
+     * and the columns {@code pathway}, {@code source} (the species whose carbons are followed) and
+     * {@code steps} (reaction ids in order, separated by spaces; {@code -R_X} runs R_X backwards).
+     * Needs atom mapping. Default {@code models/pathways.tsv}, used when it exists; a file named
+     * here must exist. Example: {@code -Datomledger.pathways=models/pathways.tsv}.
+     */
+    @Parameter(property = "atomledger.pathways")
+    private File pathways;
+
+    /**
+     * Declared carbon fates that fail the build when a trace disagrees: a TSV file with a header
+     * and the columns {@code pathway}, {@code carbon} (as reports name it, {@code C1}) and
+     * {@code fate} ({@code species} or {@code species:position}). Default {@code models/fates.tsv},
+     * used when it exists; a file named here must exist. Example: {@code -Datomledger.fates=models/fates.tsv}.
+     */
+    @Parameter(property = "atomledger.fates")
+    private File fates;
+
+    /**
+     * Label sources for the "where label can go" report: a comma list of {@code species:position}
+     * (a label such as {@code C1}, or a heavy-atom index) or {@code species} for every carbon of
+     * it. Default: none. Example: {@code -Datomledger.tracers=glc_e:C1}.
+     */
+    @Parameter(property = "atomledger.tracers")
+    private List<String> tracers;
+
     /** The project directory; model patterns are relative to it. */
     @Parameter(defaultValue = "${basedir}", readonly = true, required = true)
     private File baseDirectory;
@@ -198,7 +225,8 @@ public final class CheckMojo extends AbstractMojo {
                 severities, classSeverities, maxModelBytes)
                 .withMapping(ConfigMapper.mapping(mapping, baseDirectory, structures, threads, cacheDirectory,
                         mappingTimeBudget, maxHeavyAtoms).withSdIdField(structureIdField)
-                        .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)));
+                        .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)))
+                .withTraces(ConfigMapper.traces(baseDirectory, pathways, fates, tracers));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
         List<Path> written;

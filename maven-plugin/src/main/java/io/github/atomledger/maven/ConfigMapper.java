@@ -11,6 +11,8 @@ import io.github.atomledger.checker.engine.SeverityPolicy;
 import io.github.atomledger.checker.gate.FailScope;
 import io.github.atomledger.checker.gate.Gate;
 import io.github.atomledger.checker.gate.GateConfig;
+import io.github.atomledger.checker.trace.FateCheck;
+import io.github.atomledger.checker.trace.TraceConfig;
 import io.github.atomledger.checker.engine.ReportFormat;
 
 import io.github.atomledger.checker.export.MapExport;
@@ -62,9 +64,10 @@ final class ConfigMapper {
         }
     }
 
-    /** Every rule id a severity may be set for: the checks' and the release gate's. */
+    /** Every rule id a severity may be set for: the checks', the release gate's and the traces'. */
     static Set<String> knownRuleIds() {
         Set<String> ids = new TreeSet<>(Gate.ruleIds());
+        ids.addAll(FateCheck.RULES.keySet());
         StandardChecks.all().forEach(c -> ids.add(c.ruleId()));
         return ids;
     }
@@ -165,6 +168,48 @@ final class ConfigMapper {
                 .toAbsolutePath().normalize();
         if (!java.nio.file.Files.isDirectory(p)) {
             throw new MojoExecutionException("AtomLedger configuration: curatedMaps: not a directory: " + directory);
+        }
+        return p;
+    }
+
+    /** The default pathways file, used when it exists. */
+    static final String DEFAULT_PATHWAYS = "models/pathways.tsv";
+    /** The default declared-fates file, used when it exists. */
+    static final String DEFAULT_FATES = "models/fates.tsv";
+
+    /**
+     * What to trace: the pathways and fates files (named ones must exist; the defaults are used
+     * when they exist) and the label sources (comma lists allowed in each entry).
+     */
+    static TraceConfig traces(File baseDir, File pathways, File fates, List<String> tracers) throws MojoExecutionException {
+        Path base = baseDir.toPath().toAbsolutePath().normalize();
+        Path p = existing(base, pathways, DEFAULT_PATHWAYS, "pathways");
+        Path f = existing(base, fates, DEFAULT_FATES, "fates");
+        List<String> sources = new ArrayList<>();
+        if (tracers != null) {
+            for (String t : tracers) {
+                for (String part : t.split(",")) {
+                    if (!part.isBlank()) {
+                        sources.add(part.strip());
+                    }
+                }
+            }
+        }
+        try {
+            return new TraceConfig(p, f, sources);
+        } catch (IllegalArgumentException e) {
+            throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
+        }
+    }
+
+    private static Path existing(Path base, File named, String fallback, String parameter) throws MojoExecutionException {
+        if (named == null) {
+            Path d = base.resolve(fallback);
+            return java.nio.file.Files.isRegularFile(d) ? d : null;
+        }
+        Path p = base.resolve(named.toPath()).normalize();
+        if (!java.nio.file.Files.isRegularFile(p)) {
+            throw new MojoExecutionException("AtomLedger configuration: " + parameter + ": file not found: " + named);
         }
         return p;
     }

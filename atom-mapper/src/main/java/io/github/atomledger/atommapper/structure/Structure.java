@@ -36,7 +36,10 @@ import org.openscience.cdk.smiles.SmilesParser;
  * the input (SMILES string order; InChI's own numbering for {@link #fromInchi}; the atom block's
  * order for {@link #fromMolfile}). Explicit hydrogen
  * atoms in the input count as hydrogens of the formula, never as atoms of the graph. A {@code *}
- * atom is the pseudo-element "R".
+ * atom is the pseudo-element "R". OpenSMILES atom classes ({@code [CH2:3]}) are read as the
+ * curator's readable positions ({@link #atomLabel}: "C3"); they change nothing else (graph,
+ * fingerprint, maps and mapped SMILES are the same with and without them; only texts that name
+ * atoms, such as the mapper's stereo notes, use the labels).
  *
  * <p>Thread-safety: instances are immutable. The CDK container kept inside is never handed out
  * and is copied before any CDK call that could change it. Arguments must not be null
@@ -55,8 +58,10 @@ public final class Structure {
     private final MoleculeGraph graph;
     private final IAtomContainer master;
     private final int[] heavyToAtom;
+    private final int[] atomClasses;
+    private final String[] labels;
 
-    private Structure(String source, IAtomContainer parsed) throws StructureException {
+    private Structure(String source, IAtomContainer parsed, boolean fromSmiles) throws StructureException {
         this.source = source;
         this.master = parsed;
         GraphBuilder built = GraphBuilder.build(parsed, source);
@@ -80,6 +85,13 @@ public final class Structure {
         }
         this.formula = Formula.of(counts);
         this.charge = q;
+        this.atomClasses = new int[heavyToAtom.length];
+        for (int k = 0; k < heavyToAtom.length; k++) {
+            // CDK keeps an OpenSMILES atom class as the atom's map index; only SMILES can carry one.
+            int c = fromSmiles ? parsed.getAtom(heavyToAtom[k]).getMapIdx() : 0;
+            atomClasses[k] = Math.max(c, 0);
+        }
+        this.labels = AtomLabels.of(graph, atomClasses);
     }
 
     /**
@@ -96,7 +108,7 @@ public final class Structure {
         }
         try {
             SmilesParser parser = new SmilesParser(SilentChemObjectBuilder.getInstance());
-            return new Structure(smiles, parser.parseSmiles(smiles));
+            return new Structure(smiles, parser.parseSmiles(smiles), true);
         } catch (InvalidSmilesException e) {
             throw new StructureException("invalid SMILES '" + smiles + "': " + firstLine(e), e);
         }
@@ -127,7 +139,7 @@ public final class Structure {
             throw new StructureException("invalid InChI '" + inchi + "': "
                     + String.valueOf(toStructure.getMessage()).toLowerCase(Locale.ROOT));
         }
-        return new Structure(inchi, toStructure.getAtomContainer());
+        return new Structure(inchi, toStructure.getAtomContainer(), false);
     }
 
     /**
@@ -143,7 +155,7 @@ public final class Structure {
         Objects.requireNonNull(molfile, "molfile");
         IAtomContainer mol = io.github.atomledger.atommapper.structure.internal.MolfileReader.read(molfile);
         try {
-            return new Structure(molfile, mol);
+            return new Structure(molfile, mol, false);
         } catch (StructureException e) {
             // The graph's messages quote the source text; a molfile is named by its first line instead.
             String name = molfile.lines().findFirst().orElse("").strip();
@@ -206,6 +218,79 @@ public final class Structure {
     /** The text this structure was parsed from, unchanged. */
     public String source() {
         return source;
+    }
+
+    /** True when some heavy atom carries an OpenSMILES atom class. */
+    public boolean hasAtomClasses() {
+        for (int c : atomClasses) {
+            if (c > 0) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The OpenSMILES atom class of heavy atom {@code atom} (1-based, as in the atom maps), 0 when
+     * it has none. Atom classes are the curator's own numbering (for example biochemical
+     * positions, {@code [CH2:3]} for C3); they never enter the graph, the fingerprint or a map.
+     *
+     * @throws IndexOutOfBoundsException when {@code atom} is not between 1 and {@link #heavyAtomCount()}
+     */
+    public int atomClass(int atom) {
+        return atomClasses[atom - 1];
+    }
+
+    /**
+     * The readable name of heavy atom {@code atom} (1-based): its element and atom class
+     * ({@code "C3"} for {@code [CH2:3]}) when it has a class that no other heavy atom of this
+     * structure shares with the same element; otherwise its heavy-atom index as text ({@code "7"}).
+     * Reports name atoms this way.
+     *
+     * @throws IndexOutOfBoundsException when {@code atom} is not between 1 and {@link #heavyAtomCount()}
+     */
+    public String atomLabel(int atom) {
+        return labels[atom - 1];
+    }
+
+    /**
+     * Finds the heavy atom a reader names: a label as {@link #atomLabel} gives it ({@code "C3"})
+     * or a heavy-atom index ({@code "7"}). Returns 0 when no atom has that name.
+     */
+    public int atomNamed(String name) {
+        String n = name.strip();
+        for (int k = 0; k < labels.length; k++) {
+            if (labels[k].equals(n)) {
+                return k + 1;
+            }
+        }
+        if (!n.isEmpty() && n.chars().allMatch(Character::isDigit) && n.length() < 7) {
+            int k = Integer.parseInt(n);
+            return k >= 1 && k <= labels.length ? k : 0;
+        }
+        return 0;
+    }
+
+    /**
+     * True when {@code other} numbers its heavy atoms as this structure does: under the identity
+     * numbering the two graphs have the same elements, bonds and hydrogen counts. Two SMILES that
+     * differ only in atom classes, brackets or stereo marks are numbered alike; the same molecule
+     * written from another starting atom is not.
+     */
+    public boolean numberedAlike(Structure other) {
+        MoleculeGraph a = graph;
+        MoleculeGraph b = other.graph;
+        if (a.atomCount() != b.atomCount()) {
+            return false;
+        }
+        for (int i = 0; i < a.atomCount(); i++) {
+            if (!a.element(i).equals(b.element(i)) || a.hydrogens(i) != b.hydrogens(i)
+                    || !java.util.Arrays.equals(a.neighbours(i), b.neighbours(i))
+                    || !java.util.Arrays.equals(a.bondCodes(i), b.bondCodes(i))) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** The full formula including implicit and explicit hydrogens; "R" for wildcard atoms. */

@@ -213,8 +213,9 @@ public final class MapExport {
     }
 
     /**
-     * Readable positions: the element and the atom's class when the species' SMILES carries atom
-     * classes (a curator's own numbering), else the element and the heavy-atom number.
+     * Readable positions, as the other reports name atoms ({@code Structure.atomLabel}): the
+     * element and the atom class when the species' SMILES carries a class no other atom of the same
+     * element shares ({@code C3} for {@code [CH2:3]}), else the heavy-atom number.
      */
     private static final class Labels {
         private final Map<String, Participant> left = new HashMap<>();
@@ -227,12 +228,8 @@ public final class MapExport {
 
         String of(AtomRef a, boolean reactant) {
             Participant p = (reactant ? left : right).get(a.species());
-            if (p == null || a.atom() > p.structure().heavyAtomCount()) {
-                return "";
-            }
-            String element = p.structure().graph().element(a.atom() - 1);
-            int cls = p.structure().mapNumbers()[a.atom() - 1];
-            return element + (cls > 0 ? cls : a.atom());
+            return p == null || a.atom() > p.structure().heavyAtomCount() ? Integer.toString(a.atom())
+                    : p.structure().atomLabel(a.atom());
         }
     }
 

@@ -18,6 +18,7 @@ final class HtmlModel {
     private final Map<String, MapPicture> maps;
     private final String idPrefix;
     private final int[] pictureBudget;
+    private final int[] traceBudget = {HtmlTraces.MAX_STEP_PICTURES};
 
     HtmlModel(XmlOut x, ModelResult m, Map<String, MapPicture> maps, String idPrefix, int[] pictureBudget) {
         this.pictureBudget = pictureBudget;
@@ -40,6 +41,7 @@ final class HtmlModel {
         cards(coverage);
         coverage.details();
         modelFindings();
+        new HtmlTraces(x, m, idPrefix, traceBudget).write();
         Map<String, SpeciesChemistry> chemistry = BalanceTable.chemistry(m.model());
         for (ReactionResult r : m.reactions()) {
             MapPicture map = maps.get(r.id());

@@ -6,6 +6,7 @@ import io.github.atomledger.atommapper.mapping.AtomRef;
 import io.github.atomledger.atommapper.mapping.AtomTransition;
 import io.github.atomledger.checker.check.mapping.Coverage;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.Version;
 import io.github.atomledger.checker.baseline.BaselineMatch;
 import io.github.atomledger.checker.check.Finding;
@@ -140,7 +141,7 @@ public final class JsonReporter implements Reporter {
         o.put("findings", findings(m.modelFindings(), gate));
         List<Object> reactions = new ArrayList<>();
         for (ReactionResult r : m.reactions()) {
-            reactions.add(reaction(r, gate));
+            reactions.add(reaction(r, gate, m.mapping().structures()));
         }
         o.put("reactions", reactions);
         return o;
@@ -179,7 +180,7 @@ public final class JsonReporter implements Reporter {
         return o;
     }
 
-    private static Map<String, Object> reaction(ReactionResult r, GateMarks gate) {
+    private static Map<String, Object> reaction(ReactionResult r, GateMarks gate, SpeciesStructures structures) {
         Map<String, Object> o = new LinkedHashMap<>();
         ReactionBalance b = r.balance();
         o.put("id", r.id());
@@ -198,19 +199,19 @@ public final class JsonReporter implements Reporter {
         balance.put("elements", b.elementsComputable() ? elements : null);
         balance.put("charge", b.charge() == null ? null : b.charge().toString());
         o.put("balance", balance);
-        o.put("mapping", r.mapping() == null ? null : mapping(r.mapping()));
+        o.put("mapping", r.mapping() == null ? null : mapping(r.mapping(), structures));
         o.put("findings", findings(r.findings(), gate));
         return o;
     }
 
-    private static Map<String, Object> mapping(ReactionMapping m) {
+    private static Map<String, Object> mapping(ReactionMapping m, SpeciesStructures structures) {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("status", m.status().label());
-        o.put("carbon", transitions(m.carbons()));
+        o.put("carbon", transitions(m.carbons(), structures));
         o.put("cost", m.cost() < 0 ? null : m.cost());
         o.put("lowerBound", m.lowerBound() < 0 ? null : m.lowerBound());
         List<Object> alternatives = new ArrayList<>();
-        m.alternatives().forEach(a -> alternatives.add(transitions(a)));
+        m.alternatives().forEach(a -> alternatives.add(transitions(a, structures)));
         o.put("alternatives", alternatives);
         o.put("mappedSmiles", m.mappedSmiles().isEmpty() ? null : m.mappedSmiles());
         o.put("stereoNotes", m.stereoNotes());
@@ -223,22 +224,24 @@ public final class JsonReporter implements Reporter {
         return o;
     }
 
-    private static List<Object> transitions(List<AtomTransition> list) {
+    private static List<Object> transitions(List<AtomTransition> list, SpeciesStructures structures) {
         List<Object> out = new ArrayList<>();
         for (AtomTransition t : list) {
             Map<String, Object> o = new LinkedHashMap<>();
-            o.put("from", atom(t.from()));
-            o.put("to", atom(t.to()));
+            o.put("from", atom(t.from(), structures));
+            o.put("to", atom(t.to(), structures));
             out.add(o);
         }
         return out;
     }
 
-    private static Map<String, Object> atom(AtomRef a) {
+    private static Map<String, Object> atom(AtomRef a, SpeciesStructures structures) {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("species", a.species());
         o.put("copy", a.copy());
         o.put("atom", a.atom());
+        // The readable position from the structure's atom class ("C3"), else the index as text (#14).
+        o.put("label", structures.label(a.species(), a.atom()));
         return o;
     }
 

@@ -6,6 +6,7 @@ import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.model.ReactionInfo;
 
 import java.util.ArrayList;
@@ -72,8 +73,11 @@ public final class CuratedMapCheck implements ModelCheck {
             } else if (!validity && v.valid() && !v.agrees() && !v.differing().isEmpty()) {
                 Map<String, String> data = new TreeMap<>();
                 List<String> moved = new ArrayList<>();
+                List<String> named = new ArrayList<>();
+                SpeciesStructures structures = context.mapping().structures();
                 for (AtomTransition t : v.differing()) {
                     moved.add(t.from() + "->" + t.to());
+                    named.add(structures.name(t.from()) + "->" + structures.name(t.to()));
                 }
                 data.put("differing", String.join(",", moved));
                 data.put("differingCount", Integer.toString(moved.size()));
@@ -88,7 +92,7 @@ public final class CuratedMapCheck implements ModelCheck {
                 }
                 out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id() + from
                         + " differs from the minimum bond-edit map: " + moved.size() + " carbon(s) go elsewhere ("
-                        + String.join(", ", moved.stream().limit(6).toList()) + (moved.size() > 6 ? ", ..." : "") + ")"
+                        + String.join(", ", named.stream().limit(6).toList()) + (moved.size() > 6 ? ", ..." : "") + ")"
                         + cost + ".", data));
             }
         }

@@ -82,4 +82,22 @@ public record SpeciesStructures(Map<String, Resolved> bySpecies, List<Problem> p
     public Optional<Resolved> get(String species) {
         return Optional.ofNullable(bySpecies.get(species));
     }
+
+    /**
+     * The readable name of heavy atom {@code atom} (1-based) of a species: the label its
+     * structure's atom class gives ({@code "C3"}), else the index as text. A species without a
+     * structure, or an index outside it, gives the index.
+     */
+    public String label(String species, int atom) {
+        Resolved r = bySpecies.get(species);
+        if (r == null || atom < 1 || atom > r.structure().heavyAtomCount()) {
+            return Integer.toString(atom);
+        }
+        return r.structure().atomLabel(atom);
+    }
+
+    /** An atom of a reaction side as messages name it: {@code species#copy:label}. */
+    public String name(io.github.atomledger.atommapper.mapping.AtomRef ref) {
+        return ref.species() + "#" + ref.copy() + ":" + label(ref.species(), ref.atom());
+    }
 }
