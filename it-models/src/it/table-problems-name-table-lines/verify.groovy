@@ -11,7 +11,8 @@ def table = all.findAll { it.ruleId in ['structure.invalid', 'structure.unknown-
 assert table == [['structure.invalid', 'glc_c', 'structures.tsv', 4], ['structure.unknown-species', 'ghost_c', 'structures.tsv', 6]]
 assert all.find { it.ruleId == 'structure.unknown-species' }.message ==
         'The structure table names species ghost_c, which models/table_rows.xml does not define.'
-assert all.findAll { it.ruleId == 'mapping.structure-missing' }.collect { it.elementId }.sort() == ['adp_c', 'atp_c', 'h_c']
+def missing = all.findAll { it.ruleId == 'mapping.structure-missing' }
+assert missing.size() == 1 && missing[0].data.species.split(',').toList().sort() == ['adp_c', 'atp_c', 'h_c']
 def hex = model.reactions.find { it.id == 'R_HEX' }
 assert hex.mapping.status == 'no-structure'
 assert hex.mapping.missingStructures == ['adp_c', 'atp_c', 'h_c']

@@ -51,12 +51,23 @@ public final class AnnotateMojo extends AbstractMojo {
     private boolean overwriteCurated;
 
     /**
-     * Species structure side table (TSV: {@code species}, {@code smiles} or {@code inchi}), as for
-     * {@code check}. Needed unless the species carry identifiers.org InChI annotations; without any
-     * structure the goal fails, as nothing could be annotated.
+     * Structure files and directories, a comma list (as for {@code check}). Needed unless the
+     * species carry identifiers.org InChI annotations; without any structure the goal fails, as
+     * nothing could be annotated.
      */
     @Parameter(property = "atomledger.structures")
-    private File structures;
+    private String structures;
+
+    /** The SD data item holding each record's id (as for {@code check}). Default {@code ChEBI ID}. */
+    @Parameter(property = "atomledger.structureIdField", defaultValue = "ChEBI ID")
+    private String structureIdField;
+
+    /**
+     * A directory of curated maps as RXN files, {@code <reaction id>.rxn} (as for {@code check}):
+     * those that are valid carbon maps of their reactions are written as curated annotations.
+     */
+    @Parameter(property = "atomledger.curatedMaps")
+    private File curatedMaps;
 
     /** Mapping threads; {@code 0} means one per core. */
     @Parameter(property = "atomledger.threads", defaultValue = "0")
@@ -99,13 +110,14 @@ public final class AnnotateMojo extends AbstractMojo {
                 "none", "json", Map.of(), Map.of(), maxBytes)
                 .withMapping(ConfigMapper.mapping("on", baseDirectory, structures, ParameterValues.threads(threads),
                         cacheDirectory, ParameterValues.durationMillis("mappingTimeBudget", mappingTimeBudget, 2000),
-                        ParameterValues.positive("maxHeavyAtoms", maxHeavyAtoms, 400)));
+                        ParameterValues.positive("maxHeavyAtoms", maxHeavyAtoms, 400)).withSdIdField(structureIdField)
+                        .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)));
         try {
             RunResult result = new Engine().run(config, new MavenRunListener(getLog()));
             if (result.models().stream().allMatch(m -> m.mapping().structures().bySpecies().isEmpty())) {
                 throw new MojoExecutionException("AtomLedger annotate: no species has a structure, so nothing can be"
-                        + " annotated. Set atomledger.structures to a species structure table (TSV with the columns"
-                        + " species and smiles or inchi), for example -Datomledger.structures=structures.tsv, or add"
+                        + " annotated. Set atomledger.structures to species structure files (a TSV table with the columns"
+                        + " species and smiles or inchi, SD files or molfiles), for example -Datomledger.structures=structures.tsv, or add"
                         + " identifiers.org InChI annotations to the species.");
             }
             ModelAnnotator annotator = new ModelAnnotator(overwriteCurated, dryRun, maxBytes);

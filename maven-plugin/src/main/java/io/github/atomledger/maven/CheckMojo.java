@@ -138,12 +138,46 @@ public final class CheckMojo extends AbstractMojo {
     private String maxModelBytes;
 
     /**
-     * Species structure side table, which turns atom mapping on: a TSV file with a header and the
-     * columns {@code species} and {@code smiles} or {@code inchi}. Default: none. Example:
-     * {@code -Datomledger.structures=structures.tsv}.
+     * Structure files, a comma list, first to last in precedence: TSV tables (a {@code species}
+     * column and/or cross-reference columns {@code chebi}, {@code metanetx.chemical},
+     * {@code kegg.compound}, {@code bigg.metabolite}, {@code inchikey}; a {@code smiles} or
+     * {@code inchi} column), SD files ({@code .sdf}, {@code .sdf.gz}; see {@code structureIdField}),
+     * molfiles ({@code .mol}) and directories of molfiles, each named by species id or
+     * cross-reference ({@code CHEBI_15361.mol}). The format is told by the name, else by the
+     * content. Cross-reference keys resolve every species whose MIRIAM annotation carries the id.
+     * Setting it turns atom mapping on (see {@code mapping}). Default: none. Example:
+     * {@code -Datomledger.structures=structures.tsv,lab/chebi.sdf.gz,lab/molfiles}.
      */
     @Parameter(property = "atomledger.structures")
-    private File structures;
+    private String structures;
+
+    /**
+     * The SD data item holding each record's id. Values resolve species with that id, or species
+     * whose annotation carries it as a cross-reference (the field {@code ChEBI ID} and fields
+     * named after an identifiers.org prefix say which collection; otherwise the id's form does).
+     * Default {@code ChEBI ID}, as in the public ChEBI SD dump.
+     */
+    @Parameter(property = "atomledger.structureIdField", defaultValue = "ChEBI ID")
+    private String structureIdField;
+
+    /**
+     * A directory of curated maps as MDL RXN files with atom-atom mapping numbers, one per
+     * reaction, named {@code <reaction id>.rxn}. Each is read onto the reaction's structures and
+     * validated like a curated map in the model ({@code mapping.curated-invalid},
+     * {@code mapping.curated-differs}); {@code annotate} writes valid ones into the model. Default: none.
+     * Example: {@code -Datomledger.curatedMaps=maps-curated}.
+     */
+    @Parameter(property = "atomledger.curatedMaps")
+    private File curatedMaps;
+
+    /**
+     * Writes the maps as standard files into {@code <reportDirectory>/maps/}: one MDL RXN file per
+     * reaction with a map ({@code <reaction id>.rxn}, atom-atom mapping numbers) and
+     * {@code carbon-transitions.tsv}, all carbon transitions with readable positions; curated and
+     * inferred maps are marked. Default {@code false}. Example: {@code -Datomledger.exportMaps}.
+     */
+    @Parameter(property = "atomledger.exportMaps", defaultValue = "false")
+    private boolean exportMaps;
 
     /**
      * Atom mapping: {@code auto} (map when {@code structures} is set), {@code on} (also with
@@ -224,16 +258,19 @@ public final class CheckMojo extends AbstractMojo {
                 levels.byRule(), levels.byClass(), ParameterValues.bytes("maxModelBytes", maxModelBytes, 1L << 30))
                 .withMapping(ConfigMapper.mapping(mapping, baseDirectory, structures, ParameterValues.threads(threads),
                         cacheDirectory, ParameterValues.durationMillis("mappingTimeBudget", mappingTimeBudget, 2000),
-                        ParameterValues.positive("maxHeavyAtoms", maxHeavyAtoms, 400)))
+                        ParameterValues.positive("maxHeavyAtoms", maxHeavyAtoms, 400)).withSdIdField(structureIdField)
+                        .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)))
                 .withTraces(ConfigMapper.traces(baseDirectory, pathways, fates, tracers));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
         List<Path> written;
+        List<String> exported;
         try {
             Engine engine = new Engine();
             MavenRunListener listener = new MavenRunListener(getLog());
             result = Gate.standard(engine, config.maxModelBytes()).apply(engine.run(config, listener), gate, listener);
             written = Reporters.forFormats(config.formats()).write(result, config.reportDirectory());
+            exported = exportMaps ? ConfigMapper.exportMaps(result, config.reportDirectory().resolve("maps")) : List.of();
         } catch (AtomLedgerException e) {
             throw ConfigMapper.failure(e.getMessage(), e);
         } catch (IOException e) {
@@ -252,6 +289,13 @@ public final class CheckMojo extends AbstractMojo {
         }
         for (Path p : written) {
             getLog().info("report: " + ConfigMapper.display(config.baseDirectory(), p));
+        }
+        for (String line : exported) {
+            if (line.startsWith("!")) {
+                getLog().warn(line.substring(1));
+            } else {
+                getLog().info(line);
+            }
         }
         if (!result.failing().isEmpty()) {
             throw new MojoFailureException(ConfigMapper.failureSummary(result, written, config.baseDirectory()));

@@ -33,7 +33,8 @@ import org.openscience.cdk.smiles.SmilesParser;
  * }</pre>
  *
  * <p>Atom identity: heavy atom {@code k} (1-based) is the k-th non-hydrogen atom in the order of
- * the input (SMILES string order; InChI's own numbering for {@link #fromInchi}). Explicit hydrogen
+ * the input (SMILES string order; InChI's own numbering for {@link #fromInchi}; the atom block's
+ * order for {@link #fromMolfile}). Explicit hydrogen
  * atoms in the input count as hydrogens of the formula, never as atoms of the graph. A {@code *}
  * atom is the pseudo-element "R". OpenSMILES atom classes ({@code [CH2:3]}) are read as the
  * curator's readable positions ({@link #atomLabel}: "C3"); they change nothing else (graph,
@@ -45,7 +46,7 @@ import org.openscience.cdk.smiles.SmilesParser;
  * ({@link NullPointerException} otherwise).
  *
  * <p>Does not handle: stereo (kept in {@link #canonicalSmiles()} but ignored by the graph),
- * polymers with repeat units, reaction SMILES.
+ * polymers with repeat units (a molfile's Sgroups are ignored), reaction SMILES.
  */
 public final class Structure {
 
@@ -139,6 +140,79 @@ public final class Structure {
                     + String.valueOf(toStructure.getMessage()).toLowerCase(Locale.ROOT));
         }
         return new Structure(inchi, toStructure.getAtomContainer(), false);
+    }
+
+    /**
+     * Reads an MDL molfile (V2000 or V3000). Heavy atom k is the k-th non-hydrogen atom of the
+     * atom block; atom-atom mapping numbers in the file are kept ({@link #mapNumbers()}); query
+     * and R-group atoms ({@code R#}, {@code *}, {@code A}, ...) become the pseudo-element "R".
+     *
+     * @param molfile the molfile text, from its name line to {@code M  END}
+     * @throws StructureException for a broken layout (with {@link StructureException#line()}, 1-based
+     *     in {@code molfile}), a file CDK's MDL readers refuse, or a symmetry too complex to analyse
+     */
+    public static Structure fromMolfile(String molfile) throws StructureException {
+        Objects.requireNonNull(molfile, "molfile");
+        IAtomContainer mol = io.github.atomledger.atommapper.structure.internal.MolfileReader.read(molfile);
+        try {
+            return new Structure(molfile, mol, false);
+        } catch (StructureException e) {
+            // The graph's messages quote the source text; a molfile is named by its first line instead.
+            String name = molfile.lines().findFirst().orElse("").strip();
+            throw new StructureException(String.valueOf(e.getMessage()).replace(molfile,
+                    "molfile" + (name.isEmpty() ? "" : " " + name)), e);
+        }
+    }
+
+    /**
+     * The atom-atom mapping numbers the input carried, per heavy atom (index k-1 for heavy atom
+     * k): the map column of a molfile, or the atom class of a SMILES atom; 0 where none.
+     */
+    public int[] mapNumbers() {
+        int[] out = new int[heavyToAtom.length];
+        for (int k = 0; k < out.length; k++) {
+            out[k] = master.getAtom(heavyToAtom[k]).getMapIdx();
+        }
+        return out;
+    }
+
+    /**
+     * This molecule as an MDL V2000 molfile (CDK's writer, with 2D coordinates from CDK's layout),
+     * atoms in input order, heavy atom k carrying the atom-atom mapping number
+     * {@code mapNumbers[k-1]} (0 for none). Explicit hydrogens of the input stay atoms of the
+     * block, without numbers.
+     *
+     * @param name the first (name) line
+     * @throws IllegalArgumentException when {@code mapNumbers.length != heavyAtomCount()}
+     * @throws StructureException when CDK cannot write it (more than 999 atoms or bonds, for one)
+     */
+    public String toMolfile(String name, int[] mapNumbers) throws StructureException {
+        if (mapNumbers.length != heavyToAtom.length) {
+            throw new IllegalArgumentException("expected " + heavyToAtom.length + " map numbers, got "
+                    + mapNumbers.length);
+        }
+        try {
+            IAtomContainer copy = master.clone();
+            for (IAtom atom : copy.atoms()) {
+                atom.setMapIdx(0);
+            }
+            for (int k = 0; k < mapNumbers.length; k++) {
+                copy.getAtom(heavyToAtom[k]).setMapIdx(Math.max(0, mapNumbers[k]));
+            }
+            copy.setTitle(name);
+            try {
+                new org.openscience.cdk.layout.StructureDiagramGenerator().generateCoordinates(copy);
+            } catch (CDKException | RuntimeException e) {
+                // Coordinates are for people; a molecule CDK cannot lay out keeps zeros.
+            }
+            java.io.StringWriter out = new java.io.StringWriter();
+            try (org.openscience.cdk.io.MDLV2000Writer w = new org.openscience.cdk.io.MDLV2000Writer(out)) {
+                w.write(copy);
+            }
+            return out.toString();
+        } catch (CloneNotSupportedException | CDKException | java.io.IOException | RuntimeException e) {
+            throw new StructureException("cannot write a molfile for " + name + ": " + firstLine(e), e);
+        }
     }
 
     /** The text this structure was parsed from, unchanged. */

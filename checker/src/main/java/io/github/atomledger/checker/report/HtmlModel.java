@@ -55,7 +55,9 @@ final class HtmlModel {
         x.text(" ").leaf("span", "tag", "SBML L" + m.model().level() + "V" + m.model().version()
                 + (m.model().fbcVersion() > 0 ? " fbc v" + m.model().fbcVersion() : ""));
         x.end().nl();
-        cards();
+        HtmlCoverage coverage = new HtmlCoverage(x, m);
+        cards(coverage);
+        coverage.details();
         for (ModelSection section : SECTIONS) {
             section.write(x, m, idPrefix);
         }
@@ -104,7 +106,7 @@ final class HtmlModel {
         return run.config().failOn() != null && f.severity().atLeast(run.config().failOn()) && run.gate().mayFail(f);
     }
 
-    private void cards() throws XMLStreamException {
+    private void cards(HtmlCoverage coverage) throws XMLStreamException {
         List<Finding> all = m.allFindings();
         x.start("div", "cards").nl();
 
@@ -146,6 +148,8 @@ final class HtmlModel {
             table(st, null);
             x.end().nl();
         }
+
+        coverage.card();
 
         x.start("div", "card").leaf("h3", null, "findings by rule");
         table(HtmlReporter.countBy(all.stream().map(Finding::ruleId).toList()), all.isEmpty() ? "none" : null);

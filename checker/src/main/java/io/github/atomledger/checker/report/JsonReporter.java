@@ -4,6 +4,7 @@ import io.github.atomledger.checker.engine.ReportFormat;
 import io.github.atomledger.atommapper.formula.Rational;
 import io.github.atomledger.atommapper.mapping.AtomRef;
 import io.github.atomledger.atommapper.mapping.AtomTransition;
+import io.github.atomledger.checker.check.mapping.Coverage;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.Version;
@@ -140,12 +141,48 @@ public final class JsonReporter implements Reporter {
             summary.put("mapping", null);
         }
         o.put("summary", summary);
+        if (m.mapping().enabled()) {
+            o.put("coverage", coverage(m));
+        }
         o.put("findings", findings(m.modelFindings(), gate));
         List<Object> reactions = new ArrayList<>();
         for (ReactionResult r : m.reactions()) {
             reactions.add(reaction(r, gate, m.mapping().structures()));
         }
         o.put("reactions", reactions);
+        return o;
+    }
+
+    /** Structure coverage (issue 15): documented in docs/report-schema.json, {@code $defs/coverage}. */
+    private static Map<String, Object> coverage(ModelResult m) {
+        Map<String, ReactionResult> byId = new LinkedHashMap<>();
+        m.reactions().forEach(r -> byId.putIfAbsent(r.id(), r));
+        Coverage c = Coverage.of(m.model(), m.mapping(), id -> byId.get(id).reactionClass());
+        Map<String, Object> o = new LinkedHashMap<>();
+        o.put("considered", c.considered());
+        o.put("mappable", c.mappable());
+        o.put("blocked", c.blocked());
+        o.put("blockedOnlyByGeneric", c.blockedByGenericOnly());
+        o.put("sources", new TreeMap<>(c.sources()));
+        List<Object> missing = new ArrayList<>();
+        for (Coverage.Missing x : c.missing()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("species", x.species());
+            e.put("unblocks", x.unblocks());
+            e.put("blocks", x.blocks());
+            e.put("reactions", x.reactions());
+            missing.add(e);
+        }
+        o.put("missing", missing);
+        List<Object> generic = new ArrayList<>();
+        for (Coverage.Generic g : c.generic()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("species", g.species());
+            e.put("reason", g.reason());
+            e.put("blocks", g.blocks());
+            generic.add(e);
+        }
+        o.put("generic", generic);
         return o;
     }
 

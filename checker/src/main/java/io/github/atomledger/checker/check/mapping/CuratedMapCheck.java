@@ -60,10 +60,17 @@ public final class CuratedMapCheck implements ModelCheck {
             if (v == null) {
                 continue;
             }
+            // Issue 15: a map read from an RXN file says so, and names the file.
+            ImportedMap file = context.mapping().imported().get(r.id());
+            String from = file != null && file.read() ? " (from " + file.file() + ")" : "";
             if (validity && !v.valid()) {
-                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
-                        + " is invalid: " + String.join("; ", v.problems()) + ".",
-                        Map.of("problems", String.join("; ", v.problems()), "problemCount", Integer.toString(v.problems().size()))));
+                Map<String, String> data = new TreeMap<>(Map.of("problems", String.join("; ", v.problems()),
+                        "problemCount", Integer.toString(v.problems().size())));
+                if (!from.isEmpty()) {
+                    data.put("file", file.file());
+                }
+                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id() + from
+                        + " is invalid: " + String.join("; ", v.problems()) + ".", data));
             } else if (!validity && v.valid() && !v.agrees() && !v.differing().isEmpty()) {
                 Map<String, String> data = new TreeMap<>();
                 List<String> moved = new ArrayList<>();
@@ -81,7 +88,10 @@ public final class CuratedMapCheck implements ModelCheck {
                     data.put("optimum", String.join("; ", CarbonMapText.format(m.carbons())));
                 }
                 String cost = v.extraCost() >= 0 ? " and needs " + Wording.count(v.extraCost(), "weighted bond edit") + " more than the optimum" : "";
-                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
+                if (!from.isEmpty()) {
+                    data.put("file", file.file());
+                }
+                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id() + from
                         + " differs from the minimum bond-edit map: " + Wording.count(moved.size(), "carbon")
                         + (moved.size() == 1 ? " goes" : " go") + " elsewhere (" + Wording.shortList(named, 6) + ")"
                         + cost + ".", data));

@@ -8,17 +8,24 @@ import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.check.structure.SpeciesStructures;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.StringJoiner;
 import java.util.TreeMap;
 
 /**
- * Problems with species structure sources: {@code structure.invalid} (a SMILES or InChI that does
- * not parse), {@code structure.conflict} (two sources give different structures; the one with
- * precedence is used) and {@code structure.unknown-species} (a side-table row names no species).
- * A problem with a row of the structure table points at the table's file and line (so SARIF and
- * the console show where to edit); others at the species in the model. Data: {@code source},
- * {@code text}, {@code reason}, {@code tableLine}, and {@code table} for table rows.
+ * Problems with species structure sources: {@code structure.invalid} (a SMILES, InChI or molfile
+ * that does not parse; for a file, the finding names the file, record and line),
+ * {@code structure.conflict} (two sources give different structures; the one with precedence is
+ * used), {@code structure.unknown-species} (a table row names no species) and
+ * {@code structure.unusable-record} (records of an SD file that cannot be used at all, such as a
+ * record without the id field: one finding per file and model, naming the first few records).
+ * A problem with a row or record of a structure file points at that file and line (data {@code file});
+ * others at the species in the model (issue #13).
+ * Data: {@code source}, {@code text}, {@code reason}, {@code tableLine}, {@code origin}; for
+ * unusable records {@code file}, {@code recordCount}, {@code records} (origins, {@code ;}-separated,
+ * at most 20).
  */
 public final class StructureSourceCheck implements ModelCheck {
 
@@ -30,7 +37,7 @@ public final class StructureSourceCheck implements ModelCheck {
 
     public static List<ModelCheck> all() {
         return List.of(new StructureSourceCheck("invalid"), new StructureSourceCheck("conflict"),
-                new StructureSourceCheck("unknown-species"));
+                new StructureSourceCheck("unknown-species"), new StructureSourceCheck("unusable-record"));
     }
 
     @Override
@@ -41,8 +48,9 @@ public final class StructureSourceCheck implements ModelCheck {
     @Override
     public String description() {
         return switch (kind) {
-            case "invalid" -> "A species' SMILES or InChI cannot be read.";
+            case "invalid" -> "A species' SMILES, InChI or molfile cannot be read.";
             case "conflict" -> "Two structure sources give different structures for one species.";
+            case "unusable-record" -> "Records of a structure file cannot be used (no id, no molfile end).";
             default -> "The structure table names a species that the model does not define.";
         };
     }
@@ -54,32 +62,76 @@ public final class StructureSourceCheck implements ModelCheck {
 
     @Override
     public List<Finding> check(CheckContext context) {
+        if (kind.equals("unusable-record")) {
+            return unusable(context);
+        }
         List<Finding> out = new ArrayList<>();
         for (SpeciesStructures.Problem p : context.mapping().structures().problems()) {
             if (!p.kind().equals(kind)) {
                 continue;
             }
             String text = Wording.cut(p.text(), 120);
-            String table = context.mapping().structures().tableFile();
-            boolean inTable = !kind.equals("conflict") && p.source() == SpeciesStructures.Source.TABLE && !table.isEmpty()
-                    && p.tableLine() > 0;
             java.util.SortedMap<String, String> data = new TreeMap<>(Map.of("source", p.source().label(), "text", text,
                     "reason", p.message(), "tableLine", Integer.toString(p.tableLine())));
+            if (!p.origin().isEmpty()) {
+                data.put("origin", p.origin());
+            }
+            String file = kind.equals("conflict") || p.tableLine() <= 0 ? "" : fileOf(p.origin());
             String reason = p.message().replaceAll("\\s+", " ");
             String message = switch (kind) {
-                case "invalid" -> "The " + (inTable ? "structure table's" : p.source().label()) + " structure of species "
-                        + p.species() + " cannot be read: " + reason + ".";
+                case "invalid" -> "The " + p.source().label() + " structure of species " + p.species()
+                        + " cannot be read: " + reason + ".";
                 case "unknown-species" -> Character.toUpperCase(reason.charAt(0)) + reason.substring(1) + ".";
                 default -> "Species " + p.species() + ": " + reason + ".";
             };
-            if (inTable) {
-                data.put("table", table);
-                out.add(new Finding(ruleId(), defaultSeverity(), table, p.species(), p.tableLine(), message, data));
+            if (!file.isEmpty()) {
+                // Issue #13: a problem with a row or record of a structure file is reported where it is
+                // fixed, at that file and line (SARIF and the console show it there).
+                data.put("file", file);
+                out.add(new Finding(ruleId(), defaultSeverity(), file, p.species(), p.tableLine(), message, data));
             } else {
                 int line = context.model().species(p.species()).map(s -> s.line()).orElse(0);
                 out.add(context.finding(this, p.species(), line, message, data));
             }
         }
+        return out;
+    }
+
+    /** The file an origin names: {@code structures.tsv:12} and {@code chebi.sdf.gz record 17 (...)} give the path. */
+    static String fileOf(String origin) {
+        java.util.regex.Matcher m = ORIGIN_FILE.matcher(origin);
+        return m.find() ? m.group(1) : "";
+    }
+
+    private static final java.util.regex.Pattern ORIGIN_FILE =
+            java.util.regex.Pattern.compile("^(.+?)(?::\\d+$| record \\d+)");
+
+    private List<Finding> unusable(CheckContext context) {
+        Map<String, List<SpeciesStructures.Problem>> byFile = new LinkedHashMap<>();
+        for (SpeciesStructures.Problem p : context.mapping().structures().problems()) {
+            if (p.kind().equals(kind)) {
+                byFile.computeIfAbsent(p.text(), k -> new ArrayList<>()).add(p);
+            }
+        }
+        List<Finding> out = new ArrayList<>();
+        byFile.forEach((file, problems) -> {
+            StringJoiner records = new StringJoiner("; ");
+            StringJoiner shown = new StringJoiner("; ");
+            for (int i = 0; i < problems.size() && i < 20; i++) {
+                SpeciesStructures.Problem p = problems.get(i);
+                records.add(p.origin() + ": " + p.message());
+                if (i < 3) {
+                    shown.add(p.origin().substring(Math.min(p.origin().length(), file.length())).strip() + ": " + p.message());
+                }
+            }
+            Map<String, String> data = new TreeMap<>();
+            data.put("file", file);
+            data.put("recordCount", Integer.toString(problems.size()));
+            data.put("records", records.toString());
+            out.add(context.finding(this, context.model().modelId(), 0, file + ": "
+                    + Wording.count(problems.size(), "record") + (problems.size() == 1 ? " cannot be used and is" : " cannot be used and are")
+                    + " left out (" + shown + (problems.size() > 3 ? "; and " + (problems.size() - 3) + " more" : "") + ").", data));
+        });
         return out;
     }
 }

@@ -9,22 +9,20 @@ import java.util.Optional;
 /**
  * The structure chosen for each species, with where it came from, and the problems met while
  * resolving them. Immutable.
- *
- * @param tableFile the structure table as reports name it (relative to the project directory), or
- *                  "" when there is none; findings about a table row point at this file
  */
-public record SpeciesStructures(Map<String, Resolved> bySpecies, List<Problem> problems, String tableFile) {
+public record SpeciesStructures(Map<String, Resolved> bySpecies, List<Problem> problems) {
 
     public static final SpeciesStructures EMPTY = new SpeciesStructures(Map.of(), List.of());
 
-    /** Without a structure table. */
-    public SpeciesStructures(Map<String, Resolved> bySpecies, List<Problem> problems) {
-        this(bySpecies, problems, "");
-    }
-
-    /** Sources in order of precedence. */
+    /**
+     * Where a structure came from. The order of precedence is {@link StructureResolver}'s:
+     * structure files keyed by species id ({@link #TABLE}, {@link #MOLFILE}, {@link #SD_FILE}, in
+     * the order the files are configured), then the species' notes, its MIRIAM InChI, structure
+     * files keyed by cross-reference, and last the structures AtomLedger stored in the model.
+     */
     public enum Source {
-        TABLE("table"), MIRIAM_INCHI("miriam-inchi"), MODEL_ANNOTATION("model-annotation");
+        TABLE("table"), MOLFILE("molfile"), SD_FILE("sd-file"), NOTES("notes"), MIRIAM_INCHI("miriam-inchi"),
+        CROSS_REFERENCE("cross-reference"), MODEL_ANNOTATION("model-annotation");
 
         private final String label;
 
@@ -37,21 +35,48 @@ public record SpeciesStructures(Map<String, Resolved> bySpecies, List<Problem> p
         }
     }
 
-    /** A species' structure: the parsed structure, its source and the text it came from. */
-    public record Resolved(String species, Structure structure, Source source, String text) {
+    /**
+     * A species' structure: the parsed structure, its source and the text it came from.
+     *
+     * @param text   the SMILES or InChI as written; for a molfile, where it is (as {@code origin})
+     * @param origin where the structure was found, for people: {@code structures.tsv:12},
+     *               {@code chebi.sdf.gz record 17 (line 2301), chebi:CHEBI:15361}, {@code notes},
+     *               {@code annotation}; "" when not recorded
+     */
+    public record Resolved(String species, Structure structure, Source source, String text, String origin) {
+
+        public Resolved(String species, Structure structure, Source source, String text) {
+            this(species, structure, source, text, "");
+        }
+
+        public Resolved {
+            origin = origin == null ? "" : origin;
+        }
     }
 
     /**
      * A problem: {@code kind} is "invalid" (text does not parse), "conflict" (two sources give
-     * different structures) or "unknown-species" (a table row names no species of the model).
+     * different structures), "unknown-species" (a table row names no species of the model) or
+     * "unusable-record" (a record of a structure file cannot be used at all; {@code species} is "").
+     *
+     * @param tableLine the 1-based line in the file the problem is about, 0 when none
+     * @param origin    the file (and record) the problem is about, "" when none
      */
-    public record Problem(String species, String kind, Source source, String text, String message, int tableLine) {
+    public record Problem(String species, String kind, Source source, String text, String message, int tableLine,
+                          String origin) {
+
+        public Problem(String species, String kind, Source source, String text, String message, int tableLine) {
+            this(species, kind, source, text, message, tableLine, "");
+        }
+
+        public Problem {
+            origin = origin == null ? "" : origin;
+        }
     }
 
     public SpeciesStructures {
         bySpecies = Map.copyOf(bySpecies);
         problems = List.copyOf(problems);
-        tableFile = tableFile == null ? "" : tableFile;
     }
 
     /** Species whose structure text cannot be read (from any source): they have a structure, a broken one. */

@@ -34,8 +34,8 @@ class StructureSourceCheckTest {
 
     @Test
     void speciesWithAnUnreadableStructureIsNotAlsoReportedAsMissing() {
-        assertThat(findings()).filteredOn(f -> f.ruleId().equals("mapping.structure-missing"))
-                .extracting(Finding::elementId).containsExactly("M_x_c");
+        assertThat(findings()).filteredOn(f -> f.ruleId().equals("mapping.structure-missing")).singleElement()
+                .satisfies(f -> assertThat(f.data()).containsEntry("species", "M_x_c"));
         assertThat(TestModels.result("structure/unknown-species.xml", "structure/unknown-species.tsv").reactions().get(0)
                 .mapping().reason()).isEqualTo("no structure for M_x_c; unreadable structure for M_bad_c");
     }
