@@ -55,8 +55,9 @@ class EcoliChebiStructuresTest {
         assertThat(findings).noneMatch(f -> f.ruleId().equals("structure.formula-mismatch"));
         assertThat(findings).noneMatch(f -> f.ruleId().equals("structure.invalid"));
         // Erythrose 4-phosphate is in the file as the neutral acid (the only id the model lists
-        // that the file holds): a protonation difference, reported as such.
-        assertThat(findings.stream().filter(f -> f.ruleId().equals("structure.protonation")).map(Finding::elementId))
+        // that the file holds): a protonation difference, reported as such (one finding per model
+        // listing the species, issue #13).
+        assertThat(findings.stream().filter(f -> f.ruleId().equals("structure.protonation")).map(f -> f.data().get("species")))
                 .containsExactly("M_e4p_c");
 
         Map<MapStatus, Integer> statuses = new TreeMap<>();
