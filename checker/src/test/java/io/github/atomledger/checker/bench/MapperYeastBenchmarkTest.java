@@ -203,7 +203,7 @@ class MapperYeastBenchmarkTest {
         assertThat(results).isNotEmpty();
     }
 
-    private static String fractional(Raw raw) {
+    static String fractional(Raw raw) {
         for (Map<String, Double> side : List.of(raw.reactants(), raw.products())) {
             for (Map.Entry<String, Double> e : side.entrySet()) {
                 if (e.getValue() != Math.rint(e.getValue()) || e.getValue() < 1) {
@@ -214,7 +214,7 @@ class MapperYeastBenchmarkTest {
         return null;
     }
 
-    private static List<Participant> side(Map<String, Double> side, Map<String, Structure> structures) {
+    static List<Participant> side(Map<String, Double> side, Map<String, Structure> structures) {
         List<Participant> out = new ArrayList<>();
         side.forEach((species, coefficient) -> out.add(new Participant(species, structures.get(species),
                 (int) Math.round(coefficient))));
