@@ -149,6 +149,27 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.maxHeavyAtoms", defaultValue = "400")
     private int maxHeavyAtoms;
 
+    /**
+     * Budget per reaction for the confidence analysis of a proven optimal map (the runner-up
+     * search and the alternative C–C weights), in milliseconds of the mapping thread's CPU time;
+     * 0 switches the analysis off (then no margins, and no {@code mapping.review} findings).
+     * Default 1000. Example: {@code -Datomledger.mappingConfidenceBudget=0}.
+     */
+    @Parameter(property = "atomledger.mappingConfidenceBudget", defaultValue = "1000")
+    private long mappingConfidenceBudget;
+
+    /**
+     * Maps whose margin to the runner-up (the cheapest map that sends some carbon elsewhere) is
+     * at most this many weighted bond edits get a {@code mapping.review} finding, and a curated map
+     * at most this much dearer than the optimum is accepted ({@code mapping.curated-undecided})
+     * instead of failing as {@code mapping.curated-differs}. Default 0: a narrow margin alone does
+     * not flag, as correct maps of central metabolism often win by 1 or 2 (BENCHMARKS.md);
+     * rearrangement patterns and weight-dependent fates always do. Example:
+     * {@code -Datomledger.reviewMargin=2}.
+     */
+    @Parameter(property = "atomledger.reviewMargin", defaultValue = "0")
+    private int reviewMargin;
+
     /** The project directory; model patterns are relative to it. */
     @Parameter(defaultValue = "${basedir}", readonly = true, required = true)
     private File baseDirectory;
@@ -162,8 +183,8 @@ public final class CheckMojo extends AbstractMojo {
         RunConfig config = ConfigMapper.toConfig(baseDirectory, models,
                 ConfigMapper.reportDirectory(reportDirectory, buildDirectory, baseDirectory), failOnSeverity, formats,
                 severities, classSeverities, maxModelBytes)
-                .withMapping(ConfigMapper.mapping(mapping, baseDirectory, structures, threads, cacheDirectory,
-                        mappingTimeBudget, maxHeavyAtoms));
+                .withMapping(ConfigMapper.confidence(ConfigMapper.mapping(mapping, baseDirectory, structures, threads,
+                        cacheDirectory, mappingTimeBudget, maxHeavyAtoms), mappingConfidenceBudget, reviewMargin));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
         List<Path> written;

@@ -105,10 +105,10 @@ final class MappingStage {
             ReactionInput input = inputs.get(id);
             ReactionMapping optimum = results.get(id);
             if (annotation.isCurated() && input != null && optimum != null) {
-                curated.put(id, CuratedMaps.judge(mapper, input, optimum, annotation.carbons()));
+                curated.put(id, CuratedMaps.judge(mapper, input, optimum, annotation.carbons(), config.reviewMargin()));
             }
         });
-        return new MappingData(true, results, curated, stored, structures);
+        return new MappingData(true, results, curated, stored, structures, config.reviewMargin());
     }
 
     private record Job(String reactionId, ReactionInput input, String key) {
@@ -210,6 +210,6 @@ final class MappingStage {
         String reason = r.status() == MappingStatus.TOO_LARGE ? "too large for the mapper: " + r.reason() : r.reason();
         return new ReactionMapping(r.reactionId(), status, r.carbonTransitions(), r.alternatives(), r.cost(),
                 r.lowerBound(), r.mappedSmiles(), r.stereoNotes(), reason, r.elementDifference(), List.of(),
-                new TreeMap<>(fingerprints));
+                new TreeMap<>(fingerprints), r.confidence());
     }
 }

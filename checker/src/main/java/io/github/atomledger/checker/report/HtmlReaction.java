@@ -226,6 +226,7 @@ final class HtmlReaction {
             }
             x.end().nl();
         }
+        HtmlConfidence.write(x, r.mapping(), r.findings());
         x.end().nl();
     }
 }

@@ -183,10 +183,11 @@ public final class JsonReporter implements Reporter {
         m.elementDifference().forEach((k, v) -> diff.put(k, Long.toString(v)));
         o.put("elementDifference", diff);
         o.put("structures", new TreeMap<>(m.fingerprints()));
+        o.putAll(ConfidenceFields.of(m.confidence()));
         return o;
     }
 
-    private static List<Object> transitions(List<AtomTransition> list) {
+    static List<Object> transitions(List<AtomTransition> list) {
         List<Object> out = new ArrayList<>();
         for (AtomTransition t : list) {
             Map<String, Object> o = new LinkedHashMap<>();
@@ -197,7 +198,7 @@ public final class JsonReporter implements Reporter {
         return out;
     }
 
-    private static Map<String, Object> atom(AtomRef a) {
+    static Map<String, Object> atom(AtomRef a) {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("species", a.species());
         o.put("copy", a.copy());

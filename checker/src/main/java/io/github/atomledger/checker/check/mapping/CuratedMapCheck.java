@@ -19,6 +19,8 @@ import java.util.TreeMap;
  * (unknown atoms, non-carbons, atoms used twice or not at all), and {@code mapping.curated-differs}
  * when it is valid but differs from every minimum-cost map (not merely by symmetry): the finding
  * names the carbons that go elsewhere and how many more weighted bond edits the curated map needs.
+ * A map within the review margin of the optimum is not reported here ("criterion undecided", see
+ * {@link MappingReviewCheck}).
  * A curated map can be right where the criterion is not (enzymes do not always take the
  * cheapest route); the finding asks for a look, it does not settle the chemistry.
  */
@@ -62,7 +64,7 @@ public final class CuratedMapCheck implements ModelCheck {
                 out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
                         + " is invalid: " + String.join("; ", v.problems()) + ".",
                         Map.of("problems", String.join("; ", v.problems()), "problemCount", Integer.toString(v.problems().size()))));
-            } else if (!validity && v.valid() && !v.agrees() && !v.differing().isEmpty()) {
+            } else if (!validity && v.valid() && !v.agrees() && !v.undecided() && !v.differing().isEmpty()) {
                 Map<String, String> data = new TreeMap<>();
                 List<String> moved = new ArrayList<>();
                 for (AtomTransition t : v.differing()) {

@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.check.mapping;
 
+import io.github.atomledger.atommapper.mapping.MapConfidence;
 import io.github.atomledger.checker.transitions.TransitionAnnotation;
 import io.github.atomledger.checker.check.structure.SpeciesStructures;
 
@@ -8,12 +9,18 @@ import java.util.Optional;
 
 /**
  * Mapping results of one model for the checks: per-reaction maps, curated-map verdicts, the
- * annotations stored in the model and the resolved species structures. {@link #NONE} when mapping
- * was not run. Immutable.
+ * annotations stored in the model, the resolved species structures and the review margin the
+ * run was configured with. {@link #NONE} when mapping was not run. Immutable.
  */
 public record MappingData(boolean enabled, Map<String, ReactionMapping> mappings,
                           Map<String, CuratedVerdict> curated, Map<String, TransitionAnnotation> stored,
-                          SpeciesStructures structures) {
+                          SpeciesStructures structures, int reviewMargin) {
+
+    /** Data with the default review margin. */
+    public MappingData(boolean enabled, Map<String, ReactionMapping> mappings, Map<String, CuratedVerdict> curated,
+                       Map<String, TransitionAnnotation> stored, SpeciesStructures structures) {
+        this(enabled, mappings, curated, stored, structures, MapConfidence.DEFAULT_REVIEW_MARGIN);
+    }
 
     public static final MappingData NONE = new MappingData(false, Map.of(), Map.of(), Map.of(), SpeciesStructures.EMPTY);
 
