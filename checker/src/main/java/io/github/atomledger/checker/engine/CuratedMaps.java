@@ -66,7 +66,9 @@ final class CuratedMaps {
         Set<String> optimal = new HashSet<>();
         optimum.carbons().forEach(t -> optimal.add(t.from() + ">" + t.to()));
         List<AtomTransition> differing = curated.stream().filter(t -> !optimal.contains(t.from() + ">" + t.to())).toList();
-        boolean flagged = !optimum.confidence().reviewReasons(reviewMargin).isEmpty();
+        // A narrow margin alone does not stretch the acceptance: only a pattern or a weight-dependent fate does.
+        boolean flagged = optimum.confidence().reviewReasons(reviewMargin).stream()
+                .anyMatch(reason -> reason != MapConfidence.Reason.MARGIN);
         boolean undecided = extra >= 0 && (extra <= reviewMargin
                 || flagged && extra <= 2 * mapper.options().carbonCarbonWeight());
         return new CuratedVerdict(input.reactionId(), List.of(), false, extra, differing, undecided);

@@ -19,8 +19,9 @@ import java.util.Objects;
  * @param differing    curated transitions that differ from the optimum (the carbons that go elsewhere)
  * @param undecided    true when the map differs but is accepted because the criterion cannot
  *                     decide against it ("curated, criterion undecided"): it costs at most the review
- *                     margin more than the optimum, or the reaction calls for review and it costs at
- *                     most one moved C–C bond (twice the C–C weight) more
+ *                     margin more than the optimum, or the optimum shows a rearrangement pattern or a
+ *                     weight-dependent fate and it costs at most one moved C–C bond (twice the C–C
+ *                     weight) more
  */
 public record CuratedVerdict(String reactionId, List<String> problems, boolean agrees, int extraCost,
                              List<AtomTransition> differing, boolean undecided) {

@@ -127,8 +127,9 @@ public final class MappingReviewCheck implements ModelCheck {
             data.put("runnerUpCost", Integer.toString(c.runnerUpCost()));
             data.put("atStake", atoms(c.atStake()));
             List<String> lines = CarbonMapText.format(moved(c.runnerUp(), c.atStake()));
-            runner = "; the runner-up (" + c.margin() + (c.marginProven() ? "" : " or more") + " weighted bond edit(s)"
-                    + " dearer) sends carbon(s) " + atoms(c.atStake()) + " elsewhere ("
+            String dearer = reasons.contains(MapConfidence.Reason.MARGIN) ? "" : " (" + c.margin()
+                    + (c.marginProven() ? "" : " or more") + " weighted bond edit(s) dearer)";
+            runner = "; the runner-up" + dearer + " sends carbon(s) " + atoms(c.atStake()) + " elsewhere ("
                     + String.join("; ", lines.subList(0, Math.min(QUOTED_LINES, lines.size())))
                     + (lines.size() > QUOTED_LINES ? "; ..." : "") + ")";
         }

@@ -95,9 +95,10 @@ class MappingReviewCheckTest {
     }
 
     @Test
-    void stillRejectsACuratedMapFarFromTheOptimumOfAnUnflaggedReaction() {
-        List<Finding> f = findings(standard, "R_TPI_FAR");
-        assertThat(f).extracting(Finding::ruleId).containsExactly("mapping.curated-differs");
-        assertThat(standard.mapping().curated().get("R_TPI_FAR").undecided()).isFalse();
+    void acceptsThePinnedRunnerUpOfAnUnflaggedReactionOnlyWithinTheReviewMargin() {
+        assertThat(findings(standard, "R_TPI_PINNED")).extracting(Finding::ruleId).containsExactly("mapping.curated-differs");
+        assertThat(standard.mapping().curated().get("R_TPI_PINNED").undecided()).isFalse();
+        assertThat(findings(wide, "R_TPI_PINNED")).extracting(Finding::ruleId).containsExactly("mapping.curated-undecided");
+        assertThat(wide.mapping().curated().get("R_TPI_PINNED").extraCost()).isEqualTo(2);
     }
 }
