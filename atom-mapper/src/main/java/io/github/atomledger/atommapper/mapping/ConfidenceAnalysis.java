@@ -127,9 +127,10 @@ final class ConfidenceAnalysis {
             }
         }
         if (!keepsReported) {
-            return new WeightCheck(w, WeightCheck.Outcome.CHANGED, writer.carbons(preferred));
+            return new WeightCheck(w, WeightCheck.Outcome.CHANGED, writer.carbons(preferred),
+                    Rearrangements.find(r, p, preferred));
         }
         return newcomer == null ? new WeightCheck(w, WeightCheck.Outcome.SAME, List.of())
-                : new WeightCheck(w, WeightCheck.Outcome.TIED, writer.carbons(newcomer));
+                : new WeightCheck(w, WeightCheck.Outcome.TIED, writer.carbons(newcomer), Rearrangements.find(r, p, newcomer));
     }
 }

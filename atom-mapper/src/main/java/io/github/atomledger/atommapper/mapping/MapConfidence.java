@@ -51,7 +51,10 @@ public record MapConfidence(boolean computed, int margin, boolean marginProven, 
     public enum Reason {
         /** The reported map shows a rearrangement pattern. */
         REARRANGEMENT("rearrangement"),
-        /** Under an alternative weighting another carbon fate is as cheap or cheaper. */
+        /**
+         * Under an alternative weighting another carbon fate is cheaper, or as cheap and shows a
+         * rearrangement pattern ({@link WeightCheck#questionsTheFate()}).
+         */
         WEIGHTS("weights"),
         /** The margin is at most the review margin. */
         MARGIN("margin");
@@ -98,8 +101,7 @@ public record MapConfidence(boolean computed, int margin, boolean marginProven, 
         if (!rearrangements.isEmpty()) {
             out.add(Reason.REARRANGEMENT);
         }
-        if (weights.stream().anyMatch(w -> w.outcome() == WeightCheck.Outcome.CHANGED
-                || w.outcome() == WeightCheck.Outcome.TIED)) {
+        if (weights.stream().anyMatch(WeightCheck::questionsTheFate)) {
             out.add(Reason.WEIGHTS);
         }
         if (hasMargin() && margin <= reviewMargin) {

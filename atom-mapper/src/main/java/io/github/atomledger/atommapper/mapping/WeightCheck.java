@@ -12,8 +12,15 @@ import java.util.Objects;
  * @param carbons            for {@link Outcome#CHANGED}: the carbon transitions of the map the
  *                           alternative weighting prefers; for {@link Outcome#TIED}: those of the
  *                           other fate that becomes as cheap; else empty. Sorted.
+ * @param rearrangements     the rearrangement patterns of that other map (empty when there is none)
  */
-public record WeightCheck(int carbonCarbonWeight, Outcome outcome, List<AtomTransition> carbons) {
+public record WeightCheck(int carbonCarbonWeight, Outcome outcome, List<AtomTransition> carbons,
+                          List<Rearrangement> rearrangements) {
+
+    /** A check without another map (robust, same, undecided). */
+    public WeightCheck(int carbonCarbonWeight, Outcome outcome, List<AtomTransition> carbons) {
+        this(carbonCarbonWeight, outcome, carbons, List.of());
+    }
 
     /** What the carbon fate does under the alternative weighting. */
     public enum Outcome {
@@ -54,5 +61,16 @@ public record WeightCheck(int carbonCarbonWeight, Outcome outcome, List<AtomTran
     public WeightCheck {
         Objects.requireNonNull(outcome, "outcome");
         carbons = carbons.stream().sorted().toList();
+        rearrangements = List.copyOf(rearrangements);
+    }
+
+    /**
+     * True when this weighting calls the fate into question: another fate is strictly cheaper, or
+     * as cheap and explained by a rearrangement pattern (the kind of move the criterion is known to
+     * undervalue). A tie with an ordinary alternative, such as the known tie of transaminations at
+     * C–C weight 2, does not.
+     */
+    public boolean questionsTheFate() {
+        return outcome == Outcome.CHANGED || outcome == Outcome.TIED && !rearrangements.isEmpty();
     }
 }

@@ -88,8 +88,21 @@ class MapConfidenceTest {
         WeightCheck two = result.confidence().weights().get(0);
         assertThat(two.outcome()).isEqualTo(WeightCheck.Outcome.TIED);
         assertThat(two.carbons()).hasSize(5);
+        assertThat(two.rearrangements()).extracting(Rearrangement::kind).contains(Rearrangement.Kind.CARBON_SHIFT);
+        assertThat(two.questionsTheFate()).isTrue();
         assertThat(result.confidence().weightDependent()).isFalse();
         assertThat(result.confidence().reviewReasons(0)).containsExactly(MapConfidence.Reason.WEIGHTS);
+    }
+
+    @Test
+    void letsTheKnownTransaminationTieAtWeightTwoPass() {
+        // Alanine + 2-oxoglutarate: at C-C weight 2 grafting a C2 unit between the molecules ties
+        // with the transamination (atom-mapper README); an exchange between molecules is no rearrangement.
+        MappingResult result = MAPPER.map(FIXTURES.reaction("ALT", "ala + akg -> pyr + glu"));
+        WeightCheck two = result.confidence().weights().get(0);
+        assertThat(two.outcome()).isEqualTo(WeightCheck.Outcome.TIED);
+        assertThat(two.rearrangements()).isEmpty();
+        assertThat(result.confidence().reviewReasons(0)).isEmpty();
     }
 
     @Test

@@ -38,6 +38,7 @@ final class ConfidenceJson {
             row.put("carbonCarbonWeight", w.carbonCarbonWeight());
             row.put("outcome", w.outcome().label());
             row.set("carbons", MappingCache.transitions(w.carbons()));
+            row.set("rearrangements", rearrangements(w.rearrangements()));
         }
         o.put("note", c.note());
         return o;
@@ -66,7 +67,8 @@ final class ConfidenceJson {
         }
         List<WeightCheck> weights = new ArrayList<>();
         o.get("weights").forEach(w -> weights.add(new WeightCheck(w.get("carbonCarbonWeight").asInt(),
-                WeightCheck.Outcome.fromLabel(w.get("outcome").asText()), MappingCache.transitions(w.get("carbons")))));
+                WeightCheck.Outcome.fromLabel(w.get("outcome").asText()), MappingCache.transitions(w.get("carbons")),
+                rearrangements(w.get("rearrangements")))));
         return new MapConfidence(o.get("computed").asBoolean(), o.get("margin").asInt(), o.get("marginProven").asBoolean(),
                 o.get("runnerUpCost").asInt(), MappingCache.transitions(o.get("runnerUp")), atoms(o.get("atStake")),
                 rearrangements(o.get("rearrangements")), rearrangements(o.get("runnerUpRearrangements")), weights,

@@ -40,6 +40,7 @@ final class ConfidenceFields {
             row.put("carbonCarbonWeight", w.carbonCarbonWeight());
             row.put("outcome", w.outcome().label());
             row.put("carbon", JsonReporter.transitions(w.carbons()));
+            row.put("rearrangements", rearrangements(w.rearrangements()));
             weights.add(row);
         }
         o.put("weights", weights);

@@ -26,7 +26,8 @@ class ConfidenceJsonTest {
         MapConfidence c = new MapConfidence(true, 2, false, 7, List.of(T), List.of(new AtomRef("a", 1, 2)),
                 List.of(new Rearrangement(Rearrangement.Kind.RING_WALK, List.of(new AtomRef("a", 1, 5)), "words")),
                 List.of(new Rearrangement(Rearrangement.Kind.CARBON_SHIFT, List.of(), "more words")),
-                List.of(new WeightCheck(2, WeightCheck.Outcome.TIED, List.of(T)),
+                List.of(new WeightCheck(2, WeightCheck.Outcome.TIED, List.of(T),
+                                List.of(new Rearrangement(Rearrangement.Kind.CARBON_SHIFT, List.of(), "shift"))),
                         new WeightCheck(4, WeightCheck.Outcome.ROBUST, List.of())), "");
         ReactionMapping m = new ReactionMapping("R", MapStatus.MAPPED, List.of(T), List.of(), 5, 5, "", List.of(), "",
                 new TreeMap<>(), List.of(), new TreeMap<>(), c);

@@ -21,8 +21,9 @@ import java.util.TreeMap;
 
 /**
  * Where the criterion may be confidently wrong. {@code mapping.review}: a proven optimal map
- * (mapped or ambiguous) that shows a rearrangement pattern, whose carbon fate ties or loses under
- * the alternative C–C weights, or whose margin to the runner-up is at most the review margin; the
+ * (mapped or ambiguous) that shows a rearrangement pattern, whose carbon fate loses under an
+ * alternative C–C weight or ties there with a rearranging map, or whose margin to the runner-up
+ * is at most the review margin; the
  * finding names the carbons at stake and the runner-up and offers a curated pin as the remedy.
  * Reactions with a valid curated map stay quiet (the curator has decided), and so do maps that
  * win by a wide margin. {@code mapping.curated-undecided}: a curated map that differs from the
@@ -107,9 +108,10 @@ public final class MappingReviewCheck implements ModelCheck {
             if (!w.carbons().isEmpty()) {
                 data.put("weight." + w.carbonCarbonWeight(), String.join("; ", CarbonMapText.format(w.carbons())));
             }
-            if (w.outcome() == WeightCheck.Outcome.CHANGED || w.outcome() == WeightCheck.Outcome.TIED) {
+            if (w.questionsTheFate()) {
                 why.add("with a C–C weight of " + w.carbonCarbonWeight() + " another carbon fate is "
-                        + (w.outcome() == WeightCheck.Outcome.CHANGED ? "cheaper" : "as cheap"));
+                        + (w.outcome() == WeightCheck.Outcome.CHANGED ? "cheaper" : "as cheap")
+                        + (w.rearrangements().isEmpty() ? "" : " (" + w.rearrangements().get(0).description() + ")"));
             }
         }
         data.put("weights", String.join(",", weights));

@@ -58,7 +58,8 @@ class MappingReviewCheckTest {
         assertThat(review.data()).containsEntry("atStake", "alac: 1 2 4 7")
                 .containsEntry("runnerUp", "alac: 1 2 4 5 7 = dhmb: 3 2 5 1 7");
         assertThat(review.message()).isEqualTo("The map of reaction R_KARI may not show the enzyme's carbon fate: "
-                + "with a C–C weight of 2 another carbon fate is as cheap; the runner-up (2 weighted bond edit(s) dearer) "
+                + "with a C–C weight of 2 another carbon fate is as cheap (1,2-shift: the carbon group at alac atom 5 leaves "
+                + "atom 4 for its neighbour atom 2); the runner-up (2 weighted bond edit(s) dearer) "
                 + "sends carbon(s) alac: 1 2 4 7 elsewhere (alac: 1 2 4 7 = dhmb: 3 2 5 7); pin the intended map with a "
                 + "curated carbon map.");
     }
