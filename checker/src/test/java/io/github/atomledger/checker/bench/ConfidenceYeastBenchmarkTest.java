@@ -62,6 +62,8 @@ class ConfidenceYeastBenchmarkTest {
         Map<String, Integer> margins = new TreeMap<>();
         Map<String, Integer> kinds = new TreeMap<>();
         Map<String, Integer> weights = new TreeMap<>();
+        Map<String, Integer> reasons = new TreeMap<>();
+        int flagged = 0;
         int analysed = 0;
         List<String> examples = new ArrayList<>();
         for (MappingResult r : last) {
@@ -74,12 +76,18 @@ class ConfidenceYeastBenchmarkTest {
             margins.merge(m, 1, Integer::sum);
             for (Rearrangement x : c.rearrangements()) {
                 kinds.merge(x.kind().label(), 1, Integer::sum);
-                if (examples.size() < 40) {
-                    examples.add(r.reactionId() + ": " + x.description());
-                }
             }
             for (WeightCheck w : c.weights()) {
                 weights.merge(w.carbonCarbonWeight() + ":" + w.outcome().label(), 1, Integer::sum);
+            }
+            List<MapConfidence.Reason> why = c.reviewReasons(MapConfidence.DEFAULT_REVIEW_MARGIN);
+            if (!why.isEmpty()) {
+                flagged++;
+                why.forEach(x -> reasons.merge(x.label(), 1, Integer::sum));
+                if (examples.size() < 40) {
+                    examples.add(r.reactionId() + " (" + why + "): " + c.rearrangements().stream()
+                            .map(Rearrangement::description).toList());
+                }
             }
         }
         report.append("analysed ").append(analysed).append('\n');
@@ -106,6 +114,8 @@ class ConfidenceYeastBenchmarkTest {
         report.append("margins ").append(margins).append('\n');
         report.append("patterns in the optimum ").append(kinds).append('\n');
         report.append("weights ").append(weights).append('\n');
+        report.append(String.format("flagged for review at the default margin: %d of %d analysed (%.1f%%), by reason %s%n",
+                flagged, analysed, 100.0 * flagged / analysed, reasons));
         examples.forEach(e -> report.append("  ").append(e).append('\n'));
         System.out.print(report);
         Files.createDirectories(Path.of("target"));
