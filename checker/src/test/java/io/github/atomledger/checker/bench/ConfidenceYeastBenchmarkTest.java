@@ -11,14 +11,10 @@ import io.github.atomledger.atommapper.mapping.ReactionInput;
 import io.github.atomledger.atommapper.mapping.Rearrangement;
 import io.github.atomledger.atommapper.mapping.WeightCheck;
 import io.github.atomledger.atommapper.structure.Structure;
-import io.github.atomledger.atommapper.structure.StructureException;
-import java.io.BufferedReader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -130,18 +126,7 @@ class ConfidenceYeastBenchmarkTest {
     }
 
     static List<ReactionInput> inputs(Path data) throws Exception {
-        Map<String, Structure> structures = new HashMap<>();
-        try (BufferedReader in = Files.newBufferedReader(data.resolve("yeast-GEM.structures.tsv"), StandardCharsets.UTF_8)) {
-            in.readLine();
-            for (String line = in.readLine(); line != null; line = in.readLine()) {
-                String[] cols = line.split("\t");
-                try {
-                    structures.put(cols[0], Structure.fromSmiles(cols[1]));
-                } catch (StructureException e) {
-                    // counted by MapperYeastBenchmarkTest; not needed here
-                }
-            }
-        }
+        Map<String, Structure> structures = MapperYeastBenchmarkTest.structures(data, new int[1]);
         List<ReactionInput> inputs = new ArrayList<>();
         for (MapperYeastBenchmarkTest.Raw raw : MapperYeastBenchmarkTest.readReactions(data.resolve("yeast-GEM.xml.gz"))) {
             if (raw.reactants().isEmpty() || raw.products().isEmpty()

@@ -29,32 +29,7 @@ final class LocalSearch {
         for (int u = 0; u < map.length; u++) {
             inv[map[u]] = u;
         }
-        for (int pass = 0; pass < MAX_PASSES; pass++) {
-            boolean better = false;
-            for (int a = 0; a < r.n; a++) {
-                if (pin[a] >= 0) {
-                    continue;
-                }
-                for (int b = a + 1; b < r.n; b++) {
-                    if (pin[b] >= 0 || r.elementId[a] != r.elementId[b]) {
-                        continue;
-                    }
-                    int before = local(map, inv, a, b) + local(map, inv, b, a) + edit(map, a, b);
-                    swap(map, inv, a, b);
-                    int after = local(map, inv, a, b) + local(map, inv, b, a) + edit(map, a, b);
-                    if (after < before) {
-                        cost -= before - after;
-                        better = true;
-                    } else {
-                        swap(map, inv, a, b);
-                    }
-                }
-            }
-            if (!better) {
-                break;
-            }
-        }
-        return cost;
+        return polishWithin(map, inv, cost, m -> true);
     }
 
     /** The exact cost of a complete map. */
@@ -137,7 +112,11 @@ final class LocalSearch {
         return best;
     }
 
-    /** Like {@link #improve}, but a carbon swap is kept only when {@code allowed} still accepts the map. */
+    /**
+     * Swaps the images of two same-element atoms while that lowers the cost (at most
+     * {@link #MAX_PASSES} passes); a carbon swap is kept only when {@code allowed} still accepts
+     * the map. Returns the cost afterwards.
+     */
     private int polishWithin(int[] map, int[] inv, int cost, java.util.function.Predicate<int[]> allowed) {
         for (int pass = 0; pass < MAX_PASSES; pass++) {
             boolean better = false;
