@@ -95,6 +95,17 @@ class MapConfidenceTest {
     }
 
     @Test
+    void namesAtomsByTheirAtomClassesWhereTheStructureHasThem() throws Exception {
+        // Acetolactate numbered biochemically (C1 carboxyl ... C4 acetyl methyl, C5 the C2 methyl).
+        Structure alac = Structure.fromSmiles("[CH3:4][C:3](=O)[C:2]([CH3:5])(O)[C:1](=O)O");
+        Structure dhmb = Structure.fromSmiles("CC(C)(O)C(O)C(=O)O");
+        MappingResult result = MAPPER.map(new ReactionInput("KARI", List.of(new Participant("alac", alac, 1)),
+                List.of(new Participant("dhmb", dhmb, 1))));
+        assertThat(result.confidence().weights().get(0).rearrangements().get(0).description())
+                .isEqualTo("1,2-shift: the carbon group at alac C5 leaves C2 for its neighbour C3");
+    }
+
+    @Test
     void letsTheKnownTransaminationTieAtWeightTwoPass() {
         // Alanine + 2-oxoglutarate: at C-C weight 2 grafting a C2 unit between the molecules ties
         // with the transamination (atom-mapper README); an exchange between molecules is no rearrangement.

@@ -15,7 +15,8 @@ import io.github.atomledger.checker.check.mapping.MappingData;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.check.structure.StructureResolver;
-import io.github.atomledger.checker.check.structure.StructureTable;
+import io.github.atomledger.checker.check.structure.StructureLibrary;
+import io.github.atomledger.checker.check.mapping.ImportedMap;
 import io.github.atomledger.checker.model.ModelView;
 import io.github.atomledger.checker.model.ReactionInfo;
 
@@ -71,9 +72,9 @@ final class MappingStage {
                 }
             }
         });
-        StructureTable table = config.structures() == null ? StructureTable.empty()
-                : StructureTable.load(config.structures(), ModelLocator.relative(baseDirectory, config.structures()));
-        SpeciesStructures structures = new StructureResolver().resolve(model, table, storedSmiles);
+        StructureLibrary library = StructureLibrary.load(config.structureSources(), baseDirectory, config.sdIdField(),
+                config.cacheDirectory() == null ? null : config.cacheDirectory());
+        SpeciesStructures structures = new StructureResolver().resolve(model, library, storedSmiles);
 
         Map<String, ReactionMapping> results = new LinkedHashMap<>();
         Map<String, ReactionInput> inputs = new LinkedHashMap<>();
@@ -108,7 +109,17 @@ final class MappingStage {
                 curated.put(id, CuratedMaps.judge(mapper, input, optimum, annotation.carbons(), config.reviewMargin()));
             }
         });
-        return new MappingData(true, results, curated, stored, structures, config.reviewMargin());
+        // Curated RXN files: judged like curated maps in the model, and in their place.
+        Map<String, ImportedMap> imported = config.curatedMaps() == null ? Map.of()
+                : CuratedFiles.read(config.curatedMaps(), baseDirectory, model, inputs, results);
+        imported.forEach((id, m) -> {
+            if (m.read()) {
+                curated.put(id, m.problems().isEmpty() ? CuratedMaps.judge(mapper, inputs.get(id), results.get(id), m.carbons(),
+                        config.reviewMargin())
+                        : new CuratedVerdict(id, m.problems(), false, -1, List.of()));
+            }
+        });
+        return new MappingData(true, results, curated, stored, structures, imported, config.reviewMargin());
     }
 
     private record Job(String reactionId, ReactionInput input, String key) {

@@ -3,6 +3,7 @@ package io.github.atomledger.checker.report;
 import io.github.atomledger.atommapper.mapping.MapConfidence;
 import io.github.atomledger.atommapper.mapping.Rearrangement;
 import io.github.atomledger.atommapper.mapping.WeightCheck;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -20,7 +21,7 @@ final class ConfidenceFields {
     private ConfidenceFields() {
     }
 
-    static Map<String, Object> of(MapConfidence c) {
+    static Map<String, Object> of(MapConfidence c, SpeciesStructures structures) {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("margin", c.hasMargin() ? c.margin() : null);
         o.put("marginProven", c.hasMargin() ? c.marginProven() : null);
@@ -28,33 +29,33 @@ final class ConfidenceFields {
             o.put("runnerUp", null);
         } else {
             Map<String, Object> runner = new LinkedHashMap<>();
-            runner.put("carbon", JsonReporter.transitions(c.runnerUp()));
+            runner.put("carbon", JsonReporter.transitions(c.runnerUp(), structures));
             runner.put("cost", c.runnerUpCost());
-            runner.put("rearrangements", rearrangements(c.runnerUpRearrangements()));
+            runner.put("rearrangements", rearrangements(c.runnerUpRearrangements(), structures));
             o.put("runnerUp", runner);
         }
-        o.put("rearrangements", rearrangements(c.rearrangements()));
+        o.put("rearrangements", rearrangements(c.rearrangements(), structures));
         List<Object> weights = new ArrayList<>();
         for (WeightCheck w : c.weights()) {
             Map<String, Object> row = new LinkedHashMap<>();
             row.put("carbonCarbonWeight", w.carbonCarbonWeight());
             row.put("outcome", w.outcome().label());
-            row.put("carbon", JsonReporter.transitions(w.carbons()));
-            row.put("rearrangements", rearrangements(w.rearrangements()));
+            row.put("carbon", JsonReporter.transitions(w.carbons(), structures));
+            row.put("rearrangements", rearrangements(w.rearrangements(), structures));
             weights.add(row);
         }
         o.put("weights", weights);
         return o;
     }
 
-    private static List<Object> rearrangements(List<Rearrangement> list) {
+    private static List<Object> rearrangements(List<Rearrangement> list, SpeciesStructures structures) {
         List<Object> out = new ArrayList<>();
         for (Rearrangement r : list) {
             Map<String, Object> row = new LinkedHashMap<>();
             row.put("kind", r.kind().label());
             row.put("description", r.description());
             List<Object> atoms = new ArrayList<>();
-            r.atoms().forEach(a -> atoms.add(JsonReporter.atom(a)));
+            r.atoms().forEach(a -> atoms.add(JsonReporter.atom(a, structures)));
             row.put("atoms", atoms);
             out.add(row);
         }

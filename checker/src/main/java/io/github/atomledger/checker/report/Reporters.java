@@ -56,15 +56,23 @@ public final class Reporters {
                 throw new IllegalArgumentException("report format '" + f.label() + "' is not available in this version");
             }
             list.add(f == ReportFormat.HTML ? new HtmlReporter(mappings) : s.get());
+            if (f == ReportFormat.JSON) {
+                // The traces' machine files travel with the JSON report (written only when something was traced).
+                list.add(new TracesReporter());
+                list.add(new ReachReporter());
+            }
         }
         return new Reporters(list);
     }
 
-    /** Writes every report; returns the paths written, in format order. */
+    /** Writes every report; returns the paths written, in format order (reports with nothing to say write nothing). */
     public List<Path> write(RunResult result, Path directory) throws IOException {
         List<Path> out = new ArrayList<>();
         for (Reporter r : reporters) {
-            out.add(r.write(result, directory));
+            Path p = r.write(result, directory);
+            if (p != null) {
+                out.add(p);
+            }
         }
         return out;
     }

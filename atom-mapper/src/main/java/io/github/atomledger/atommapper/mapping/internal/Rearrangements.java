@@ -64,10 +64,10 @@ public final class Rearrangements {
                 boolean neighbours = r.bond[a][b] != 0 && p.bond[map[a]][map[b]] != 0;
                 if (r.element[g].equals("C") && (neighbours || ringsR.sameSystem(a, b))) {
                     out.add(new Rearrangement(Rearrangement.Kind.CARBON_SHIFT, refs(r, g, a, b), neighbours
-                            ? "1,2-shift: the carbon group at " + name(r, g) + " leaves atom " + atom(r, a)
-                                    + " for its neighbour atom " + atom(r, b)
-                            : "a carbon group moving around a ring: " + name(r, g) + " leaves ring atom " + atom(r, a)
-                                    + " for ring atom " + atom(r, b)));
+                            ? "1,2-shift: the carbon group at " + name(r, g) + " leaves " + atom(r, a)
+                                    + " for its neighbour " + atom(r, b)
+                            : "a carbon group moving around a ring: " + name(r, g) + " leaves ring " + atom(r, a)
+                                    + " for ring " + atom(r, b)));
                     usedBroken[i] = true;
                     usedFormed[j] = true;
                 }
@@ -89,8 +89,8 @@ public final class Rearrangements {
                 }
                 out.add(new Rearrangement(Rearrangement.Kind.SKELETON_REARRANGEMENT, refs(r, bb[0], bb[1], ff[0], ff[1]),
                         "skeleton rearrangement in " + molecule(r, m) + ": the " + r.element[bb[0]] + "–"
-                                + r.element[bb[1]] + " bond between atoms " + atom(r, bb[0]) + " and " + atom(r, bb[1])
-                                + " is broken and a C–C bond between atoms " + atom(r, ff[0]) + " and " + atom(r, ff[1])
+                                + r.element[bb[1]] + " bond between " + atom(r, bb[0]) + " and " + atom(r, bb[1])
+                                + " is broken and a C–C bond between " + atom(r, ff[0]) + " and " + atom(r, ff[1])
                                 + " formed"));
                 moleculeDone[m] = true;
                 break;
@@ -129,9 +129,9 @@ public final class Rearrangements {
                 int a = lost[0];
                 int b = gained[0];
                 String what = lost[1] == gained[1] ? "the " + r.element[lost[1]] + " at " + name(r, lost[1])
-                        + " leaves ring atom " + atom(r, a) + " for ring atom " + atom(r, b)
-                        : "ring atom " + atom(r, a) + " of " + molecule(r, r.molecule[a]) + " loses its "
-                        + r.element[lost[1]] + " and ring atom " + atom(r, b) + " gains one";
+                        + " leaves ring " + atom(r, a) + " for ring " + atom(r, b)
+                        : "ring " + atom(r, a) + " of " + molecule(r, r.molecule[a]) + " loses its "
+                        + r.element[lost[1]] + " and ring " + atom(r, b) + " gains one";
                 out.add(new Rearrangement(Rearrangement.Kind.RING_WALK, refs(r, lost[1], a, b),
                         "a heteroatom moving around a ring: " + what));
                 usedBroken[i] = true;
@@ -294,10 +294,12 @@ public final class Rearrangements {
     }
 
     private static String name(SideGraph g, int a) {
-        return molecule(g, g.molecule[a]) + " atom " + atom(g, a);
+        return molecule(g, g.molecule[a]) + " " + atom(g, a);
     }
 
-    private static int atom(SideGraph g, int a) {
-        return g.local[a] + 1;
+    /** The atom's readable position ("C3") where its structure has atom classes, else "atom 7" (its index). */
+    private static String atom(SideGraph g, int a) {
+        String label = g.structure(g.molecule[a]).atomLabel(g.local[a] + 1);
+        return label.chars().allMatch(Character::isDigit) ? "atom " + label : label;
     }
 }

@@ -9,6 +9,7 @@ import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.model.ReactionInfo;
 import io.github.atomledger.checker.transitions.CarbonMapText;
 
@@ -18,6 +19,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.function.BiFunction;
 
 /**
  * Where the criterion may be confidently wrong. {@code mapping.review}: a proven optimal map
@@ -127,11 +129,12 @@ public final class MappingReviewCheck implements ModelCheck {
         if (!c.runnerUp().isEmpty()) {
             data.put("runnerUp", String.join("; ", CarbonMapText.format(c.runnerUp())));
             data.put("runnerUpCost", Integer.toString(c.runnerUpCost()));
-            data.put("atStake", atoms(c.atStake()));
-            List<String> lines = CarbonMapText.format(moved(c.runnerUp(), c.atStake()));
+            data.put("atStake", atoms(c.atStake(), (species, atom) -> Integer.toString(atom)));
+            SpeciesStructures structures = context.mapping().structures();
+            List<String> lines = CarbonMapText.format(moved(c.runnerUp(), c.atStake()), structures::label);
             String dearer = reasons.contains(MapConfidence.Reason.MARGIN) ? "" : " (" + c.margin()
                     + (c.marginProven() ? "" : " or more") + " weighted bond edit(s) dearer)";
-            runner = "; the runner-up" + dearer + " sends carbon(s) " + atoms(c.atStake()) + " elsewhere ("
+            runner = "; the runner-up" + dearer + " sends carbon(s) " + atoms(c.atStake(), structures::label) + " elsewhere ("
                     + String.join("; ", lines.subList(0, Math.min(QUOTED_LINES, lines.size())))
                     + (lines.size() > QUOTED_LINES ? "; ..." : "") + ")";
         }
@@ -162,15 +165,15 @@ public final class MappingReviewCheck implements ModelCheck {
         return map.stream().filter(t -> wanted.contains(t.from())).toList();
     }
 
-    /** Atoms grouped by molecule copy, e.g. {@code "hpp: 6 7 8; o2: 1"}. */
-    private static String atoms(List<AtomRef> atoms) {
-        Map<String, List<Integer>> byMolecule = new TreeMap<>();
+    /** Atoms grouped by molecule copy and named by {@code names}, e.g. {@code "hpp: 6 7 8; o2: 1"}. */
+    private static String atoms(List<AtomRef> atoms, BiFunction<String, Integer, String> names) {
+        Map<String, List<String>> byMolecule = new TreeMap<>();
         for (AtomRef a : atoms) {
             byMolecule.computeIfAbsent(a.copy() == 1 ? a.species() : a.species() + "#" + a.copy(),
-                    k -> new ArrayList<>()).add(a.atom());
+                    k -> new ArrayList<>()).add(names.apply(a.species(), a.atom()));
         }
         List<String> parts = new ArrayList<>();
-        byMolecule.forEach((k, v) -> parts.add(k + ": " + String.join(" ", v.stream().map(String::valueOf).toList())));
+        byMolecule.forEach((k, v) -> parts.add(k + ": " + String.join(" ", v)));
         return String.join("; ", parts);
     }
 }
