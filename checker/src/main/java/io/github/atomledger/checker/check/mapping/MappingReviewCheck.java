@@ -101,7 +101,8 @@ public final class MappingReviewCheck implements ModelCheck {
         if (reasons.contains(MapConfidence.Reason.REARRANGEMENT)) {
             List<String> words = c.rearrangements().stream().map(Rearrangement::description).toList();
             data.put("rearrangements", String.join("; ", words));
-            why.add("it explains the change by a " + words.get(0) + (words.size() > 1 ? " (and " + (words.size() - 1)
+            why.add("it explains the change by " + (words.get(0).startsWith("a ") ? "" : "a ") + words.get(0)
+                    + (words.size() > 1 ? " (and " + (words.size() - 1)
                     + " more pattern(s))" : ""));
         }
         List<String> weights = new ArrayList<>();

@@ -70,6 +70,8 @@ class MappingReviewCheckTest {
         assertThat(f).extracting(Finding::ruleId).containsExactly("mapping.review");
         assertThat(f.get(0).data()).containsEntry("reasons", "rearrangement");
         assertThat(f.get(0).data().get("rearrangements")).startsWith("a heteroatom moving around a ring: ");
+        assertThat(f.get(0).message()).contains("may not show the enzyme's carbon fate: it explains the change by a heteroatom"
+                + " moving around a ring: ");
     }
 
     @Test
