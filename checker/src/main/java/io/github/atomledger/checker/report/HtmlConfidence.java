@@ -5,6 +5,7 @@ import io.github.atomledger.atommapper.mapping.Rearrangement;
 import io.github.atomledger.atommapper.mapping.WeightCheck;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.transitions.CarbonMapText;
 
 import java.util.ArrayList;
@@ -14,14 +15,15 @@ import javax.xml.stream.XMLStreamException;
 /**
  * How sure the map is, under the drawing of a reaction card: the margin to the runner-up, the
  * rearrangement patterns, the alternative weightings, and the runner-up's carbon transitions in
- * the annotation's text form. Open when the reaction has a {@code mapping.review} finding.
+ * the annotation's text form with the reports' atom labels. Open when the reaction has a {@code mapping.review} finding.
  */
 final class HtmlConfidence {
 
     private HtmlConfidence() {
     }
 
-    static void write(XmlOut x, ReactionMapping m, List<Finding> findings) throws XMLStreamException {
+    static void write(XmlOut x, ReactionMapping m, List<Finding> findings, SpeciesStructures structures)
+            throws XMLStreamException {
         if (m == null || !m.confidence().computed()) {
             return;
         }
@@ -49,7 +51,7 @@ final class HtmlConfidence {
         }
         if (!c.runnerUp().isEmpty()) {
             x.leaf("p", "nomap", "Runner-up (" + c.runnerUpCost() + " weighted bond edits), carbon transitions:").nl();
-            x.leaf("pre", null, String.join("\n", CarbonMapText.format(c.runnerUp()))).nl();
+            x.leaf("pre", null, String.join("\n", CarbonMapText.format(c.runnerUp(), structures::label))).nl();
             for (Rearrangement r : c.runnerUpRearrangements()) {
                 x.leaf("p", "nomap", "Runner-up: " + r.description() + ".").nl();
             }

@@ -226,7 +226,7 @@ final class HtmlReaction {
             }
             x.end().nl();
         }
-        HtmlConfidence.write(x, r.mapping(), r.findings());
+        HtmlConfidence.write(x, r.mapping(), r.findings(), m.mapping().structures());
         x.end().nl();
     }
 }
