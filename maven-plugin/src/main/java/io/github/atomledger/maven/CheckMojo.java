@@ -10,7 +10,6 @@ import io.github.atomledger.checker.report.ConsoleSummary;
 import io.github.atomledger.checker.report.Reporters;
 
 import java.io.File;
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -166,25 +165,33 @@ public final class CheckMojo extends AbstractMojo {
                         mappingTimeBudget, maxHeavyAtoms));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
-        List<Path> written;
+        Reporters.Outcome reports;
         try {
             Engine engine = new Engine();
             MavenRunListener listener = new MavenRunListener(getLog());
             result = Gate.standard(engine, config.maxModelBytes()).apply(engine.run(config, listener), gate, listener);
-            written = Reporters.forFormats(config.formats()).write(result, config.reportDirectory());
+            reports = Reporters.forFormats(config.formats()).writeAll(result, config.reportDirectory());
         } catch (AtomLedgerException e) {
             throw new MojoExecutionException(e.getMessage(), e);
-        } catch (IOException e) {
-            throw new MojoExecutionException("AtomLedger could not write its reports: " + e.getMessage(), e);
         } catch (IllegalArgumentException e) {
             throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
         }
+        List<Path> written = reports.written();
         boolean colour = ConsoleSummary.colourWanted(System.getenv(), System.console() != null);
         for (String line : ConsoleSummary.lines(result, colour)) {
             getLog().info(line);
         }
         for (Path p : written) {
             getLog().info("report: " + ConfigMapper.display(config.baseDirectory(), p));
+        }
+        // A report we could not write is a broken tool, not a finding: fail loudly, after the
+        // summary and every other report are out.
+        for (Reporters.Failure f : reports.failures()) {
+            getLog().error("AtomLedger: " + f.message());
+        }
+        if (!reports.failures().isEmpty()) {
+            Reporters.Failure f = reports.failures().get(0);
+            throw new MojoExecutionException("AtomLedger: " + f.message(), f.error());
         }
         if (!result.failing().isEmpty()) {
             throw new MojoFailureException(ConfigMapper.failureSummary(result, written, config.baseDirectory()));

@@ -203,29 +203,41 @@ final class HtmlReaction {
             return;
         }
         x.start("figure", "pic").nl();
-        if (!map.svg().isEmpty()) {
-            if (pictureAllowed) {
-                x.start("div", "pic-box");
-                SvgEmbed.copy(map.svg(), idPrefix + "-" + HtmlReporter.token(r.id()) + "-", x.writer());
-                x.end().nl();
-            } else {
-                x.leaf("p", "nomap", "Drawing left out: the report holds at most " + HtmlReporter.MAX_PICTURES
-                        + " pictures.").nl();
-            }
+        List<String> notes = new java.util.ArrayList<>(map.notes());
+        if (map.drawing() != null && !pictureAllowed) {
+            x.leaf("p", "nomap", "Drawing left out: the report holds at most " + HtmlReporter.MAX_PICTURES
+                    + " pictures.").nl();
+        } else if (map.drawn()) {
+            PictureFile p = map.picture();
+            String src = PictureFiles.FOLDER + "/" + p.file();
+            x.start("div", "pic-box");
+            img(src, p, "pic-plain", "Atom map of " + r.id());
+            img(src + "#indices", p, "pic-idx", "Atom map of " + r.id() + " with atom indices");
+            x.end().nl();
+            p.notes().forEach(n -> notes.add("Drawing: " + n));
+        } else if (map.picture() != null) {
+            map.picture().notes().forEach(n -> notes.add("No drawing: " + n));
         }
         StringBuilder caption = new StringBuilder(map.summary());
-        if (!map.svg().isEmpty()) {
+        if (map.drawn() && pictureAllowed) {
             caption.append(caption.length() == 0 ? "" : " ")
                     .append("Each mapped carbon has the colour of the reactant carbon it comes from.");
         }
         x.leaf("figcaption", null, caption.toString()).nl();
-        if (!map.notes().isEmpty()) {
+        if (!notes.isEmpty()) {
             x.start("ul", "findings");
-            for (String n : map.notes()) {
+            for (String n : notes) {
                 x.leaf("li", null, n);
             }
             x.end().nl();
         }
         x.end().nl();
+    }
+
+    /** A lazily loaded picture file; width and height keep the page from jumping while it loads. */
+    private void img(String src, PictureFile p, String cls, String alt) throws XMLStreamException {
+        x.empty("img").attr("class", cls).attr("src", src).attr("width", Integer.toString(p.width()))
+                .attr("height", Integer.toString(p.height())).attr("loading", "lazy").attr("decoding", "async")
+                .attr("alt", alt);
     }
 }

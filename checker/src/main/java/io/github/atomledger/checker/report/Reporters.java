@@ -60,13 +60,57 @@ public final class Reporters {
         return new Reporters(list);
     }
 
-    /** Writes every report; returns the paths written, in format order. */
+    /**
+     * Writes every report; returns the paths written, in format order.
+     *
+     * @throws IOException when a report could not be written (after every other report was)
+     */
     public List<Path> write(RunResult result, Path directory) throws IOException {
-        List<Path> out = new ArrayList<>();
-        for (Reporter r : reporters) {
-            out.add(r.write(result, directory));
+        Outcome out = writeAll(result, directory);
+        if (!out.failures().isEmpty()) {
+            Failure first = out.failures().get(0);
+            if (first.error() instanceof IOException io) {
+                throw io;
+            }
+            throw new IOException(first.message(), first.error());
         }
-        return out;
+        return out.written();
+    }
+
+    /**
+     * Writes every report, each on its own: one that fails (a bug, a disk error) does not keep the
+     * others from being written. The caller decides what a failure means.
+     */
+    public Outcome writeAll(RunResult result, Path directory) {
+        List<Path> written = new ArrayList<>();
+        List<Failure> failures = new ArrayList<>();
+        for (Reporter r : reporters) {
+            try {
+                written.add(r.write(result, directory));
+            } catch (IOException | RuntimeException e) {
+                failures.add(new Failure(r.format(), e));
+            }
+        }
+        return new Outcome(written, failures);
+    }
+
+    /** The reports written (format order) and those that failed. */
+    public record Outcome(List<Path> written, List<Failure> failures) {
+        public Outcome {
+            written = List.copyOf(written);
+            failures = List.copyOf(failures);
+        }
+    }
+
+    /** A report that could not be written, and why. */
+    public record Failure(ReportFormat format, Exception error) {
+
+        /** One sentence: which report and the error's own message (which names the item). */
+        public String message() {
+            String why = error.getMessage() == null ? error.toString() : error.getMessage();
+            return "the " + format.label() + " report could not be written: "
+                    + (error instanceof IOException ? "" : error.getClass().getSimpleName() + ": ") + why;
+        }
     }
 
     /** The formats that this build can write. */
