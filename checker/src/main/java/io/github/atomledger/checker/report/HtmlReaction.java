@@ -210,20 +210,33 @@ final class HtmlReaction {
         } else if (map.drawn()) {
             PictureFile p = map.picture();
             String src = PictureFiles.FOLDER + "/" + p.file();
+            // A CSS background, not an <img>: Chromium loads every <img> of the page at once
+            // (headless, it ignores loading="lazy"), while a background inside an article that
+            // content-visibility skips is not even requested. See DEVELOPERS.md.
             x.start("div", "pic-box");
-            img(src, p, "pic-plain", "Atom map of " + r.id());
-            img(src + "#indices", p, "pic-idx", "Atom map of " + r.id() + " with atom indices");
+            x.start("div", "pic").attr("role", "img").attr("aria-label", "Atom map of " + r.id())
+                    .attr("style", "--pic:url(" + src + ");--pic-idx:url(" + src + "#indices);aspect-ratio:"
+                            + p.width() + "/" + p.height() + ";max-width:" + p.width() + "px").end();
             x.end().nl();
             p.notes().forEach(n -> notes.add("Drawing: " + n));
         } else if (map.picture() != null) {
             map.picture().notes().forEach(n -> notes.add("No drawing: " + n));
         }
         StringBuilder caption = new StringBuilder(map.summary());
-        if (map.drawn() && pictureAllowed) {
+        boolean shown = map.drawn() && pictureAllowed;
+        if (shown) {
             caption.append(caption.length() == 0 ? "" : " ")
-                    .append("Each mapped carbon has the colour of the reactant carbon it comes from.");
+                    .append("Each mapped carbon has the colour of the reactant carbon it comes from. ");
         }
-        x.leaf("figcaption", null, caption.toString()).nl();
+        x.start("figcaption").text(caption.toString());
+        if (shown) {
+            x.start("a").attr("href", PictureFiles.FOLDER + "/" + map.picture().file()).text("Open the drawing").end();
+            x.text(" (");
+            x.start("a").attr("href", PictureFiles.FOLDER + "/" + map.picture().file() + "#indices")
+                    .text("with atom indices").end();
+            x.text(").");
+        }
+        x.end().nl();
         if (!notes.isEmpty()) {
             x.start("ul", "findings");
             for (String n : notes) {
@@ -234,10 +247,4 @@ final class HtmlReaction {
         x.end().nl();
     }
 
-    /** A lazily loaded picture file; width and height keep the page from jumping while it loads. */
-    private void img(String src, PictureFile p, String cls, String alt) throws XMLStreamException {
-        x.empty("img").attr("class", cls).attr("src", src).attr("width", Integer.toString(p.width()))
-                .attr("height", Integer.toString(p.height())).attr("loading", "lazy").attr("decoding", "async")
-                .attr("alt", alt);
-    }
 }
