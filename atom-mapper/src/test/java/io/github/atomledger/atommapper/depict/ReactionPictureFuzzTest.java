@@ -16,10 +16,13 @@ import org.junit.jupiter.api.Tag;
 
 /**
  * Coverage-guided fuzzing of the drawing path (Jazzer; issue #12). Each input is read as a
- * molecule's SMILES; a molecule AtomLedger accepts ({@link Structure#fromSmiles}) is drawn as the
- * reaction "molecule to itself" with every heavy atom mapped to itself, which runs the whole
- * path: reaction SMILES with atom maps, CDK's mapped-reaction layout and its fallbacks, CDK's
- * structure generator, and our SVG writer. The contract: {@link ReactionPicture#draw()} never
+ * molecule's SMILES, optionally followed by {@code |} and a number; a molecule AtomLedger accepts
+ * ({@link Structure#fromSmiles}) is drawn as the reaction "molecule to itself" with every heavy
+ * atom mapped to itself, or, with a number, to an atom of the same element chosen by a
+ * permutation seeded with it (a scrambled map, as a best-found map across copies can be: that is
+ * what broke CDK's aligned layout on yeast-GEM). This runs the whole path: reaction SMILES with
+ * atom maps, CDK's mapped-reaction layout and its fallbacks, CDK's structure generator, and our
+ * SVG writer. The contract: {@link ReactionPicture#draw()} never
  * throws on such input (CDK failing is a note, not an exception), and a drawn picture is
  * well-formed XML with a positive size.
  *
@@ -46,6 +49,16 @@ class ReactionPictureFuzzTest {
 
     private static void check(byte[] input) throws XMLStreamException {
         String smiles = new String(input, StandardCharsets.UTF_8);
+        Long seed = null;
+        int bar = smiles.lastIndexOf('|');
+        if (bar >= 0) {
+            try {
+                seed = Long.parseLong(smiles.substring(bar + 1).strip());
+            } catch (NumberFormatException e) {
+                return;
+            }
+            smiles = smiles.substring(0, bar);
+        }
         if (smiles.length() > MAX_LENGTH || smiles.contains(">")) {
             return;
         }
@@ -56,15 +69,17 @@ class ReactionPictureFuzzTest {
             return;
         }
         String mapped;
+        String product;
         try {
             mapped = identityMapped(s);
+            product = seed == null ? mapped : s.smilesWithAtomClasses(shuffledWithinElements(s, seed));
         } catch (IllegalStateException | AssertionError e) {
             // Writing the mapped SMILES is the mapper's output, not the drawing path: with Java
             // assertions on (as under surefire), CDK's SMILES writer (Beam) asserts on some odd
             // stereo the parser accepted; without them it writes a SMILES. Skip such inputs here.
             return;
         }
-        ReactionPicture.Drawing d = ReactionPicture.of("R_FUZZ", mapped + ">>" + mapped, List.of("a"), List.of("b"))
+        ReactionPicture.Drawing d = ReactionPicture.of("R_FUZZ", mapped + ">>" + product, List.of("a"), List.of("b"))
                 .atomIndices(true).draw();
         if (d.drawn()) {
             assertThat(d.width()).isPositive();
@@ -82,6 +97,25 @@ class ReactionPictureFuzzTest {
             classes[i] = i + 1;
         }
         return s.smilesWithAtomClasses(classes);
+    }
+
+    /** Map numbers 1..n permuted among atoms of the same element (a seeded Fisher–Yates shuffle). */
+    static int[] shuffledWithinElements(Structure s, long seed) {
+        int n = s.heavyAtomCount();
+        java.util.Map<String, java.util.List<Integer>> byElement = new java.util.TreeMap<>();
+        for (int i = 0; i < n; i++) {
+            byElement.computeIfAbsent(s.graph().element(i), k -> new java.util.ArrayList<>()).add(i);
+        }
+        int[] classes = new int[n];
+        java.util.Random random = new java.util.Random(seed);
+        for (java.util.List<Integer> atoms : byElement.values()) {
+            java.util.List<Integer> targets = new java.util.ArrayList<>(atoms);
+            java.util.Collections.shuffle(targets, random);
+            for (int k = 0; k < atoms.size(); k++) {
+                classes[targets.get(k)] = atoms.get(k) + 1;
+            }
+        }
+        return classes;
     }
 
     static void wellFormed(String svg) throws XMLStreamException {

@@ -151,7 +151,7 @@ public final class HtmlReporter implements Reporter {
         }
         MappingConfig mc = result.config().mapping();
         Map<String, PictureFile> drawn = new PictureFiles(mc.cacheDirectory(), mc.threads()).draw(requests, directory);
-        Map<PictureRequest, PictureFile> byRequest = new java.util.HashMap<>();
+        Map<PictureRequest, PictureFile> byRequest = new java.util.IdentityHashMap<>();
         for (PictureRequest r : requests) {
             byRequest.put(r, drawn.get(r.key()));
         }
