@@ -3,6 +3,7 @@ package io.github.atomledger.checker.report;
 import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.json.JsonWriteFeature;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 
@@ -24,7 +25,9 @@ import java.util.Map;
  */
 final class JsonText {
 
-    private static final JsonFactory FACTORY = new JsonFactory();
+    /** Characters outside the BMP as UTF-8, not as escaped surrogate pairs (as the text writer did). */
+    private static final JsonFactory FACTORY = JsonFactory.builder()
+            .enable(JsonWriteFeature.COMBINE_UNICODE_SURROGATES_IN_UTF8).build();
 
     private JsonText() {
     }
