@@ -225,7 +225,19 @@ public final class ReactionPicture {
                 highlight.put(o, PALETTE.get(i));
             }
         }
-        ReactionScene.Options options = new ReactionScene.Options(highlight, 6.0, atomIndices, indicesOnRequest,
+        Set<IAtom> indexed = new HashSet<>();
+        if (atomIndices) {
+            for (org.openscience.cdk.interfaces.IAtomContainerSet set : List.of(rxn.getReactants(), rxn.getProducts())) {
+                for (IAtomContainer mol : set.atomContainers()) {
+                    for (IAtom a : mol.atoms()) {
+                        if (a.getMapIdx() > 0) {
+                            indexed.add(a);
+                        }
+                    }
+                }
+            }
+        }
+        ReactionScene.Options options = new ReactionScene.Options(highlight, 6.0, indexed, indicesOnRequest,
                 TEXT, TEXT);
         while (true) {
             try {

@@ -42,6 +42,7 @@ public final class ReactionScene {
     private static final double PLUS = 8;
     private static final double ARROW = 44;
     private static final double TITLE_PX = 12;
+    private static final double INDEX_PX = 8;
     private static final Font SYMBOLS = new Font(Font.SANS_SERIF, Font.PLAIN, 13);
     private static final Font TITLES = new Font(Font.SANS_SERIF, Font.PLAIN, (int) TITLE_PX);
     private static final FontRenderContext FRC = new FontRenderContext(null, true, true);
@@ -51,15 +52,18 @@ public final class ReactionScene {
      *
      * @param highlight        colour per atom or bond, drawn as an outer glow
      * @param glowWidth        the glow's width (CDK's {@code OuterGlowWidth})
-     * @param mapNumbers       print each mapped atom's map number beside it
-     * @param indicesOnRequest hide the map numbers unless the SVG is opened at {@code #indices}
+     * @param indexed          atoms whose map number is printed beside them as SVG text (class
+     *                         {@value SvgSink#INDEX}); CDK's own annotation labels are drawn as
+     *                         well, whatever this says
+     * @param indicesOnRequest hide those numbers unless the SVG is opened at {@code #indices}
      * @param text             colour of titles, signs and the arrow
      * @param annotation       colour of the map numbers
      */
-    public record Options(Map<IChemObject, Color> highlight, double glowWidth, boolean mapNumbers,
+    public record Options(Map<IChemObject, Color> highlight, double glowWidth, Set<IAtom> indexed,
                           boolean indicesOnRequest, Color text, Color annotation) {
         public Options {
             highlight = Map.copyOf(highlight);
+            indexed = Set.copyOf(indexed);
         }
     }
 
@@ -136,7 +140,7 @@ public final class ReactionScene {
             Placed p = placed.get(i);
             double column = Math.max(p.width(), titleWidth(all.get(i)));
             double centre = x + column / 2;
-            p.draw(sink, scale, centre, mid, options.text());
+            p.draw(sink, scale, centre, mid, options);
             String title = title(all.get(i));
             if (title != null) {
                 sink.text(centre, MARGIN + molHeight + GAP / 2 + TITLE_PX, TITLE_PX, options.text(), title, "title");
@@ -157,23 +161,18 @@ public final class ReactionScene {
         try {
             for (IAtom a : mol.atoms()) {
                 mark(a, options, marked);
-                if (options.mapNumbers() && a.getMapIdx() > 0) {
-                    a.setProperty(StandardGenerator.ANNOTATION_LABEL, Integer.toString(a.getMapIdx()));
-                    marked.add(a);
-                }
             }
             for (IBond b : mol.bonds()) {
                 mark(b, options, marked);
             }
             IRenderingElement element = generator.generate(mol, model);
             Bounds bounds = new Bounds(element);
-            return new Placed(element, bounds, bounds.width() * scale, bounds.height() * scale, null);
+            return new Placed(element, bounds, bounds.width() * scale, bounds.height() * scale, mol);
         } catch (RuntimeException e) {
             throw new MoleculeFailure(mol, e);
         } finally {
             for (IChemObject o : marked) {
                 o.removeProperty(StandardGenerator.HIGHLIGHT_COLOR);
-                o.removeProperty(StandardGenerator.ANNOTATION_LABEL);
             }
         }
     }
@@ -234,14 +233,41 @@ public final class ReactionScene {
         return sorted[sorted.length / 2];
     }
 
+    /**
+     * Where an atom's index goes: half a bond length from the atom, away from its bonds (the
+     * opposite of the sum of the unit vectors to its neighbours; up and to the right for a lone
+     * atom or when the bonds cancel out). Returns the offset in model units.
+     */
+    static double[] indexOffset(IAtomContainer mol, IAtom atom, double bondLength) {
+        Point2d p = atom.getPoint2d();
+        double dx = 0;
+        double dy = 0;
+        for (IAtom n : mol.getConnectedAtomsList(atom)) {
+            Point2d q = n.getPoint2d();
+            double len = q == null ? 0 : p.distance(q);
+            if (len > 0) {
+                dx += (q.x - p.x) / len;
+                dy += (q.y - p.y) / len;
+            }
+        }
+        double len = Math.hypot(dx, dy);
+        if (len < 1e-6) {
+            dx = -Math.sqrt(0.5);
+            dy = -Math.sqrt(0.5);
+            len = 1;
+        }
+        return new double[] {-dx / len * bondLength * 0.5, -dy / len * bondLength * 0.5};
+    }
+
     /** A molecule's elements and size in px, or a frame for a molecule that could not be laid out. */
-    private record Placed(IRenderingElement element, Bounds bounds, double width, double height, IAtomContainer frame) {
+    private record Placed(IRenderingElement element, Bounds bounds, double width, double height, IAtomContainer mol) {
 
         static Placed frame(IAtomContainer mol) {
             return new Placed(null, null, 3 * BOND_PX, 2 * BOND_PX, mol);
         }
 
-        void draw(SvgSink sink, double scale, double centreX, double centreY, Color colour) {
+        void draw(SvgSink sink, double scale, double centreX, double centreY, Options options) {
+            Color colour = options.text();
             if (element == null) {
                 double x0 = centreX - width / 2;
                 double y0 = centreY - height / 2;
@@ -255,6 +281,14 @@ public final class ReactionScene {
             }
             sink.place(scale, (bounds.minX + bounds.maxX) / 2, (bounds.minY + bounds.maxY) / 2, centreX, centreY);
             sink.add(element);
+            double bond = BOND_PX / scale;
+            for (IAtom a : mol.atoms()) {
+                if (a.getMapIdx() > 0 && options.indexed().contains(a) && a.getPoint2d() != null) {
+                    double[] off = indexOffset(mol, a, bond);
+                    sink.modelText(a.getPoint2d().x + off[0], a.getPoint2d().y + off[1], INDEX_PX, options.annotation(),
+                            Integer.toString(a.getMapIdx()), SvgSink.INDEX);
+                }
+            }
         }
     }
 }

@@ -31,8 +31,16 @@ import org.openscience.cdk.renderer.elements.path.PathElement;
  */
 public final class SvgSink {
 
-    /** An element class CDK marks map numbers (atom annotations) with. */
-    static final String ANNOTATION = "annotation";
+    /** The class of map numbers shown on request (see {@link #toSvg}). */
+    public static final String INDEX = "idx";
+
+    /**
+     * Classes CDK gives every element of a kind; dropped from the output, where they would only
+     * add bytes. Any other class of a marked element (for example one set through an atom's
+     * {@code MarkedElement.CLASS_KEY}) is kept on the elements inside it.
+     */
+    private static final java.util.Set<String> CDK_CLASSES = java.util.Set.of("atom", "bond", "mol", "reactant",
+            "product", "agent", "title", "outerglow");
 
     private final List<Item> items = new ArrayList<>();
     private final Map<String, Integer> shapeUses = new HashMap<>();
@@ -64,7 +72,7 @@ public final class SvgSink {
                 add(child, cls);
             }
         } else if (e instanceof MarkedElement m) {
-            add(m.element(), cls != null ? cls : m.getClasses().contains(ANNOTATION) ? ANNOTATION : null);
+            add(m.element(), classes(cls, m.getClasses()));
         } else if (e instanceof LineElement l) {
             items.add(new Line(tx(l.firstPointX), ty(l.firstPointY), tx(l.secondPointX), ty(l.secondPointY),
                     tenths(l.width * scale), l.color, cls));
@@ -79,6 +87,24 @@ public final class SvgSink {
         } else if (e != null) {
             throw new IllegalStateException("no SVG form for the CDK element " + e.getClass().getSimpleName());
         }
+    }
+
+    private static String classes(String outer, List<String> inner) {
+        java.util.LinkedHashSet<String> all = new java.util.LinkedHashSet<>();
+        if (outer != null) {
+            all.addAll(List.of(outer.split(" ")));
+        }
+        for (String c : inner) {
+            if (!CDK_CLASSES.contains(c) && c.matches("[A-Za-z][A-Za-z0-9_-]*")) {
+                all.add(c);
+            }
+        }
+        return all.isEmpty() ? null : String.join(" ", all);
+    }
+
+    /** Text at a point given in model coordinates (through the current {@link #place}), in px size. */
+    public void modelText(double x, double y, double size, Color color, String text, String cls) {
+        items.add(new Text(tx(x), ty(y) + tenths(size * 0.35), tenths(size), color, text, cls));
     }
 
     /** A line in px (tenths), for arrows and frames drawn by the caller. */
@@ -246,8 +272,9 @@ public final class SvgSink {
      * The SVG document: {@code width} by {@code height} px (rounded up to whole pixels), a white
      * background, shared shapes in {@code <defs>}, then every element in the order added.
      *
-     * @param indicesOnRequest when true, map numbers are hidden unless the document is opened at
-     *                         its fragment {@code #indices} (for example {@code x.svg#indices})
+     * @param indicesOnRequest when true, elements of class {@value #INDEX} are hidden unless the
+     *                         document is opened at its fragment {@code #indices} (for example
+     *                         {@code x.svg#indices})
      */
     public String toSvg(double width, double height, boolean indicesOnRequest) {
         int w = (int) Math.ceil(width);
@@ -260,11 +287,11 @@ public final class SvgSink {
         sb.append("<svg xmlns='http://www.w3.org/2000/svg' version='1.1' id='indices' width='").append(w)
                 .append("px' height='").append(h).append("px' viewBox='0 0 ").append(w).append(' ').append(h)
                 .append("'>\n");
-        boolean annotated = items.stream().anyMatch(i -> ANNOTATION.equals(i.cls()));
-        if (annotated && indicesOnRequest) {
-            sb.append("<style>.").append(ANNOTATION).append("{display:none}#indices:target .").append(ANNOTATION)
-                    .append("{display:inline}</style>\n");
+        sb.append("<style>text{stroke:none;text-anchor:middle;font-family:DejaVu Sans,Verdana,Arial,sans-serif}");
+        if (indicesOnRequest) {
+            sb.append('.').append(INDEX).append("{display:none}#indices:target .").append(INDEX).append("{display:inline}");
         }
+        sb.append("</style>\n");
         Map<String, String> defs = new LinkedHashMap<>();
         for (Item i : items) {
             if (i instanceof Shape s && shapeUses.get(s.d()) > 1 && !defs.containsKey(s.d())) {
@@ -454,8 +481,7 @@ public final class SvgSink {
             num(sb, y);
             sb.append("' font-size='");
             num(sb, size);
-            sb.append("' fill='").append(colour(color))
-                    .append("' stroke='none' text-anchor='middle' font-family='DejaVu Sans,Verdana,Arial,sans-serif'>");
+            sb.append("' fill='").append(colour(color)).append("'>");
             escape(sb, text);
             sb.append("</text>\n");
         }
