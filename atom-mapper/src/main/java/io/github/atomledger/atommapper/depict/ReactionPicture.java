@@ -71,7 +71,7 @@ public final class ReactionPicture {
      * (colours, sizes, layout routes, the SVG writer) must increase it: caches of drawn pictures
      * key on it, so a stale picture is never shown.
      */
-    public static final int STYLE_VERSION = 2;
+    public static final int STYLE_VERSION = 3;
 
     /**
      * What a cache of drawn pictures must key on besides the input: {@link #STYLE_VERSION} and

@@ -1,6 +1,7 @@
 package io.github.atomledger.checker.report;
 
-import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -43,18 +44,42 @@ final class PictureCache {
         if (!Files.isRegularFile(json)) {
             return null;
         }
-        try {
-            JsonNode o = JSON.readTree(json.toFile());
-            List<String> notes = new ArrayList<>();
-            o.get("notes").forEach(n -> notes.add(n.asText()));
+        // Read with the streaming parser: the object mapper's start-up is a visible part of a warm run.
+        try (JsonParser p = JSON.getFactory().createParser(json.toFile())) {
+            boolean drawn = false;
+            int width = -1;
+            int height = -1;
+            List<String> notes = null;
+            if (p.nextToken() != JsonToken.START_OBJECT) {
+                return null;
+            }
+            while (p.nextToken() == JsonToken.FIELD_NAME) {
+                String field = p.currentName();
+                JsonToken value = p.nextToken();
+                switch (field) {
+                    case "drawn" -> drawn = value == JsonToken.VALUE_TRUE;
+                    case "width" -> width = p.getIntValue();
+                    case "height" -> height = p.getIntValue();
+                    case "notes" -> {
+                        notes = new ArrayList<>();
+                        while (p.nextToken() == JsonToken.VALUE_STRING) {
+                            notes.add(p.getText());
+                        }
+                    }
+                    default -> p.skipChildren();
+                }
+            }
+            if (notes == null || width < 0 || height < 0) {
+                return null;
+            }
             Path svg = null;
-            if (o.get("drawn").asBoolean()) {
+            if (drawn) {
                 svg = base(key).resolveSibling(key + ".svg");
                 if (!Files.isRegularFile(svg)) {
                     return null;
                 }
             }
-            return new Entry(svg, o.get("width").asInt(), o.get("height").asInt(), notes);
+            return new Entry(svg, width, height, notes);
         } catch (IOException | RuntimeException e) {
             return null;
         }
