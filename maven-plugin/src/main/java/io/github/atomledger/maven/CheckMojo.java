@@ -129,13 +129,14 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.mapping", defaultValue = "auto")
     private String mapping;
 
-    /** Mapping threads; 0 means one per core. Default 0. */
+    /** Threads for mapping, drawing the HTML report's pictures and writing reports; 0 means one per core. Default 0. */
     @Parameter(property = "atomledger.threads", defaultValue = "0")
     private int threads;
 
     /**
-     * Where mapping results are cached between runs (they survive {@code mvn clean}); {@code none}
-     * switches the cache off. Default {@code ~/.cache/atomledger/maps}.
+     * Where mapping results are cached between runs (they survive {@code mvn clean}), with the
+     * HTML report's drawn pictures in its {@code pictures/} folder; {@code none} switches both off.
+     * Default {@code ~/.cache/atomledger/maps}.
      */
     @Parameter(property = "atomledger.cacheDirectory")
     private String cacheDirectory;
