@@ -7,10 +7,8 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import java.io.IOException;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -90,7 +88,7 @@ final class PictureCache {
             Path json = base(key).resolveSibling(key + ".json");
             Files.createDirectories(json.getParent());
             if (svg != null) {
-                atomically(base(key).resolveSibling(key + ".svg"), svg);
+                ReportFiles.write(base(key).resolveSibling(key + ".svg"), svg);
             }
             ObjectNode o = JSON.createObjectNode();
             o.put("drawn", svg != null);
@@ -98,23 +96,9 @@ final class PictureCache {
             o.put("height", height);
             ArrayNode list = o.putArray("notes");
             notes.forEach(list::add);
-            atomically(json, JSON.writeValueAsBytes(o));
+            ReportFiles.write(json, JSON.writeValueAsBytes(o));
         } catch (IOException e) {
             // A cache that cannot be written only costs time; the run goes on.
-        }
-    }
-
-    static void atomically(Path target, byte[] bytes) throws IOException {
-        Path tmp = Files.createTempFile(target.getParent(), "." + target.getFileName(), ".tmp");
-        try {
-            Files.write(tmp, bytes);
-            try {
-                Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
         }
     }
 }
