@@ -139,14 +139,21 @@ class PicturesBenchmarkTest {
         return done ? String.format("%.1f s (exit %d)", s, p.exitValue()) : "timeout after 180 s";
     }
 
-    private static void deleteTree(Path dir) throws IOException {
+    /** Deletes a tree as far as it can (Chromium may still be writing its profile as it exits). */
+    private static void deleteTree(Path dir) {
         if (!Files.exists(dir)) {
             return;
         }
         try (Stream<Path> s = Files.walk(dir)) {
             for (Path p : s.sorted(Comparator.reverseOrder()).toList()) {
-                Files.deleteIfExists(p);
+                try {
+                    Files.deleteIfExists(p);
+                } catch (IOException e) {
+                    // left behind in the temporary directory
+                }
             }
+        } catch (IOException | java.io.UncheckedIOException e) {
+            // the same
         }
     }
 }
