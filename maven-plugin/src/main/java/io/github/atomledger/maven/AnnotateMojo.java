@@ -48,9 +48,20 @@ public final class AnnotateMojo extends AbstractMojo {
     @Parameter(property = "atomledger.overwriteCurated", defaultValue = "false")
     private boolean overwriteCurated;
 
-    /** Species structure side table (TSV: {@code species}, {@code smiles} or {@code inchi}). */
+    /** Structure files and directories, a comma list (as for {@code check}). */
     @Parameter(property = "atomledger.structures")
-    private File structures;
+    private String structures;
+
+    /** The SD data item holding each record's id (as for {@code check}). Default {@code ChEBI ID}. */
+    @Parameter(property = "atomledger.structureIdField", defaultValue = "ChEBI ID")
+    private String structureIdField;
+
+    /**
+     * A directory of curated maps as RXN files, {@code <reaction id>.rxn} (as for {@code check}):
+     * those that are valid carbon maps of their reactions are written as curated annotations.
+     */
+    @Parameter(property = "atomledger.curatedMaps")
+    private File curatedMaps;
 
     /** Mapping threads; 0 means one per core. Default 0. */
     @Parameter(property = "atomledger.threads", defaultValue = "0")
@@ -84,7 +95,8 @@ public final class AnnotateMojo extends AbstractMojo {
         RunConfig config = ConfigMapper.toConfig(baseDirectory, models, new File(baseDirectory, "target/atomledger"),
                 "none", "json", Map.of(), Map.of(), maxModelBytes)
                 .withMapping(ConfigMapper.mapping("on", baseDirectory, structures, threads, cacheDirectory,
-                        mappingTimeBudget, maxHeavyAtoms));
+                        mappingTimeBudget, maxHeavyAtoms).withSdIdField(structureIdField)
+                        .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)));
         RunResult result;
         try {
             result = new Engine().run(config, new MavenRunListener(getLog()));

@@ -10,6 +10,7 @@ import io.github.atomledger.checker.report.ConsoleSummary;
 import io.github.atomledger.checker.report.Reporters;
 
 import java.io.File;
+import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
@@ -114,12 +115,46 @@ public final class CheckMojo extends AbstractMojo {
     private long maxModelBytes;
 
     /**
-     * Species structure side table: a TSV file with a header and the columns {@code species} and
-     * {@code smiles} or {@code inchi}. Setting it turns atom mapping on (see {@code mapping}).
-     * Example: {@code -Datomledger.structures=structures.tsv}.
+     * Structure files, a comma list, first to last in precedence: TSV tables (a {@code species}
+     * column and/or cross-reference columns {@code chebi}, {@code metanetx.chemical},
+     * {@code kegg.compound}, {@code bigg.metabolite}, {@code inchikey}; a {@code smiles} or
+     * {@code inchi} column), SD files ({@code .sdf}, {@code .sdf.gz}; see {@code structureIdField}),
+     * molfiles ({@code .mol}) and directories of molfiles, each named by species id or
+     * cross-reference ({@code CHEBI_15361.mol}). The format is told by the name, else by the
+     * content. Cross-reference keys resolve every species whose MIRIAM annotation carries the id.
+     * Setting it turns atom mapping on (see {@code mapping}). Example:
+     * {@code -Datomledger.structures=structures.tsv,lab/chebi.sdf.gz,lab/molfiles}.
      */
     @Parameter(property = "atomledger.structures")
-    private File structures;
+    private String structures;
+
+    /**
+     * The SD data item holding each record's id. Values resolve species with that id, or species
+     * whose annotation carries it as a cross-reference (the field {@code ChEBI ID} and fields
+     * named after an identifiers.org prefix say which collection; otherwise the id's form does).
+     * Default {@code ChEBI ID}, as in the public ChEBI SD dump.
+     */
+    @Parameter(property = "atomledger.structureIdField", defaultValue = "ChEBI ID")
+    private String structureIdField;
+
+    /**
+     * A directory of curated maps as MDL RXN files with atom-atom mapping numbers, one per
+     * reaction, named {@code <reaction id>.rxn}. Each is read onto the reaction's structures and
+     * validated like a curated map in the model ({@code mapping.curated-invalid},
+     * {@code mapping.curated-differs}); {@code annotate} writes valid ones into the model. Default: none.
+     * Example: {@code -Datomledger.curatedMaps=maps-curated}.
+     */
+    @Parameter(property = "atomledger.curatedMaps")
+    private File curatedMaps;
+
+    /**
+     * Writes the maps as standard files into {@code <reportDirectory>/maps/}: one MDL RXN file per
+     * reaction with a map ({@code <reaction id>.rxn}, atom-atom mapping numbers) and
+     * {@code carbon-transitions.tsv}, all carbon transitions with readable positions; curated and
+     * inferred maps are marked. Default {@code false}. Example: {@code -Datomledger.exportMaps}.
+     */
+    @Parameter(property = "atomledger.exportMaps", defaultValue = "false")
+    private boolean exportMaps;
 
     /**
      * Atom mapping: {@code auto} (map when {@code structures} is set), {@code on} (also with
@@ -149,6 +184,33 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.maxHeavyAtoms", defaultValue = "400")
     private int maxHeavyAtoms;
 
+    /**
+     * Pathways whose carbons are followed (see {@code docs/traces.md}): a TSV file with a header
+     * and the columns {@code pathway}, {@code source} (the species whose carbons are followed) and
+     * {@code steps} (reaction ids in order, separated by spaces; {@code -R_X} runs R_X backwards).
+     * Needs atom mapping. Default {@code models/pathways.tsv}, used when it exists; a file named
+     * here must exist. Example: {@code -Datomledger.pathways=models/pathways.tsv}.
+     */
+    @Parameter(property = "atomledger.pathways")
+    private File pathways;
+
+    /**
+     * Declared carbon fates that fail the build when a trace disagrees: a TSV file with a header
+     * and the columns {@code pathway}, {@code carbon} (as reports name it, {@code C1}) and
+     * {@code fate} ({@code species} or {@code species:position}). Default {@code models/fates.tsv},
+     * used when it exists; a file named here must exist. Example: {@code -Datomledger.fates=models/fates.tsv}.
+     */
+    @Parameter(property = "atomledger.fates")
+    private File fates;
+
+    /**
+     * Label sources for the "where label can go" report: a comma list of {@code species:position}
+     * (a label such as {@code C1}, or a heavy-atom index) or {@code species} for every carbon of
+     * it. Default: none. Example: {@code -Datomledger.tracers=glc_e:C1}.
+     */
+    @Parameter(property = "atomledger.tracers")
+    private List<String> tracers;
+
     /** The project directory; model patterns are relative to it. */
     @Parameter(defaultValue = "${basedir}", readonly = true, required = true)
     private File baseDirectory;
@@ -163,7 +225,9 @@ public final class CheckMojo extends AbstractMojo {
                 ConfigMapper.reportDirectory(reportDirectory, buildDirectory, baseDirectory), failOnSeverity, formats,
                 severities, classSeverities, maxModelBytes)
                 .withMapping(ConfigMapper.mapping(mapping, baseDirectory, structures, threads, cacheDirectory,
-                        mappingTimeBudget, maxHeavyAtoms));
+                        mappingTimeBudget, maxHeavyAtoms).withSdIdField(structureIdField)
+                        .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)))
+                .withTraces(ConfigMapper.traces(baseDirectory, pathways, fates, tracers));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
         Reporters.Outcome reports;
@@ -185,6 +249,23 @@ public final class CheckMojo extends AbstractMojo {
         for (Path p : written) {
             getLog().info("report: " + ConfigMapper.display(config.baseDirectory(), p));
         }
+        // Maps are exported after the reports; a file system error there fails the goal like a
+        // report that could not be written.
+        List<String> exported;
+        String exportError = null;
+        try {
+            exported = exportMaps ? ConfigMapper.exportMaps(result, config.reportDirectory().resolve("maps")) : List.of();
+        } catch (IOException e) {
+            exported = List.of();
+            exportError = "AtomLedger could not export the maps: " + e.getMessage();
+        }
+        for (String line : exported) {
+            if (line.startsWith("!")) {
+                getLog().warn(line.substring(1));
+            } else {
+                getLog().info(line);
+            }
+        }
         // A report we could not write is a broken tool, not a finding: fail loudly, after the
         // summary and every other report are out.
         for (Reporters.Failure f : reports.failures()) {
@@ -193,6 +274,9 @@ public final class CheckMojo extends AbstractMojo {
         if (!reports.failures().isEmpty()) {
             Reporters.Failure f = reports.failures().get(0);
             throw new MojoExecutionException("AtomLedger: " + f.message(), f.error());
+        }
+        if (exportError != null) {
+            throw new MojoExecutionException(exportError);
         }
         if (!result.failing().isEmpty()) {
             throw new MojoFailureException(ConfigMapper.failureSummary(result, written, config.baseDirectory()));

@@ -11,9 +11,14 @@ import io.github.atomledger.checker.engine.SeverityPolicy;
 import io.github.atomledger.checker.gate.FailScope;
 import io.github.atomledger.checker.gate.Gate;
 import io.github.atomledger.checker.gate.GateConfig;
+import io.github.atomledger.checker.trace.FateCheck;
+import io.github.atomledger.checker.trace.TraceConfig;
 import io.github.atomledger.checker.engine.ReportFormat;
 
+import io.github.atomledger.checker.export.MapExport;
+
 import java.io.File;
+import java.io.IOException;
 import java.time.Duration;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -59,9 +64,10 @@ final class ConfigMapper {
         }
     }
 
-    /** Every rule id a severity may be set for: the checks' and the release gate's. */
+    /** Every rule id a severity may be set for: the checks', the release gate's and the traces'. */
     static Set<String> knownRuleIds() {
         Set<String> ids = new TreeSet<>(Gate.ruleIds());
+        ids.addAll(FateCheck.RULES.keySet());
         StandardChecks.all().forEach(c -> ids.add(c.ruleId()));
         return ids;
     }
@@ -85,24 +91,23 @@ final class ConfigMapper {
     /**
      * The mapping settings.
      *
-     * @param mode       "auto" (map when a structure table is given), "on" or "off"
-     * @param structures the side table, or null
+     * @param mode       "auto" (map when structure files are given), "on" or "off"
+     * @param structures structure files and directories, a comma list (tables, SD files, molfiles,
+     *                   molfile directories) relative to the base directory, or null
      * @param threads    worker threads; 0 or less means one per core
      * @param cache      the cache directory, or null for the default; "none" switches the cache off
      * @param budgetMs   time budget per reaction in milliseconds
      * @param maxHeavy   size cap per molecule in heavy atoms
      */
-    static MappingConfig mapping(String mode, File baseDir, File structures, int threads, String cache, long budgetMs,
+    static MappingConfig mapping(String mode, File baseDir, String structures, int threads, String cache, long budgetMs,
                                  int maxHeavy) throws MojoExecutionException {
         String m = mode == null ? "auto" : mode.strip().toLowerCase(Locale.ROOT);
         if (!m.equals("auto") && !m.equals("on") && !m.equals("off")) {
             throw new MojoExecutionException("AtomLedger configuration: mapping: unknown value '" + mode
                     + "'; allowed: auto, on, off");
         }
-        boolean enabled = m.equals("on") || (m.equals("auto") && structures != null);
-        if (structures != null && !structures.isFile()) {
-            throw new MojoExecutionException("AtomLedger configuration: structures: file not found: " + structures);
-        }
+        List<Path> sources = structureSources(baseDir, structures);
+        boolean enabled = m.equals("on") || (m.equals("auto") && !sources.isEmpty());
         if (budgetMs <= 0 || maxHeavy <= 0) {
             throw new MojoExecutionException("AtomLedger configuration: mappingTimeBudget and maxHeavyAtoms must be positive, were "
                     + budgetMs + " and " + maxHeavy);
@@ -118,8 +123,95 @@ final class ConfigMapper {
         }
         int n = threads > 0 ? threads : Runtime.getRuntime().availableProcessors();
         MappingOptions options = MappingOptions.defaults().withTimeBudget(Duration.ofMillis(budgetMs)).withMaxHeavyAtoms(maxHeavy);
-        return new MappingConfig(enabled, structures == null ? null : structures.toPath().toAbsolutePath().normalize(),
-                options, n, cacheDir);
+        return new MappingConfig(enabled, null, options, n, cacheDir, sources, null, null);
+    }
+
+    /** The files of {@code atomledger.structures}, each of which must exist. */
+    static List<Path> structureSources(File baseDir, String structures) throws MojoExecutionException {
+        List<Path> out = new ArrayList<>();
+        if (structures == null) {
+            return out;
+        }
+        for (String part : structures.split(",")) {
+            if (part.isBlank()) {
+                continue;
+            }
+            Path p = Path.of(part.strip());
+            Path abs = (p.isAbsolute() ? p : baseDir.toPath().resolve(p)).toAbsolutePath().normalize();
+            if (!java.nio.file.Files.exists(abs)) {
+                throw new MojoExecutionException("AtomLedger configuration: structures: file not found: " + part.strip());
+            }
+            out.add(abs);
+        }
+        return out;
+    }
+
+    /** Writes the run's maps as RXN files and a transition table; returns what to log (warnings prefixed "!"). */
+    static List<String> exportMaps(RunResult result, Path directory) throws IOException {
+        if (result.models().stream().noneMatch(m -> m.mapping().enabled())) {
+            return List.of("!exportMaps is set but mapping is off (set structures or mapping=on): no maps to export");
+        }
+        MapExport.Written w = MapExport.write(result, directory);
+        List<String> lines = new ArrayList<>();
+        lines.add("maps: " + w.inferred() + " inferred and " + w.curated() + " curated map(s) written as RXN files to "
+                + display(result.config().baseDirectory(), directory));
+        w.failed().forEach(f -> lines.add("!maps: not exported: " + f));
+        return lines;
+    }
+
+    /** The directory of curated RXN maps, which must exist, or null. */
+    static Path curatedMaps(File baseDir, File directory) throws MojoExecutionException {
+        if (directory == null) {
+            return null;
+        }
+        Path p = (directory.isAbsolute() ? directory.toPath() : baseDir.toPath().resolve(directory.toPath()))
+                .toAbsolutePath().normalize();
+        if (!java.nio.file.Files.isDirectory(p)) {
+            throw new MojoExecutionException("AtomLedger configuration: curatedMaps: not a directory: " + directory);
+        }
+        return p;
+    }
+
+    /** The default pathways file, used when it exists. */
+    static final String DEFAULT_PATHWAYS = "models/pathways.tsv";
+    /** The default declared-fates file, used when it exists. */
+    static final String DEFAULT_FATES = "models/fates.tsv";
+
+    /**
+     * What to trace: the pathways and fates files (named ones must exist; the defaults are used
+     * when they exist) and the label sources (comma lists allowed in each entry).
+     */
+    static TraceConfig traces(File baseDir, File pathways, File fates, List<String> tracers) throws MojoExecutionException {
+        Path base = baseDir.toPath().toAbsolutePath().normalize();
+        Path p = existing(base, pathways, DEFAULT_PATHWAYS, "pathways");
+        Path f = existing(base, fates, DEFAULT_FATES, "fates");
+        List<String> sources = new ArrayList<>();
+        if (tracers != null) {
+            for (String t : tracers) {
+                for (String part : t.split(",")) {
+                    if (!part.isBlank()) {
+                        sources.add(part.strip());
+                    }
+                }
+            }
+        }
+        try {
+            return new TraceConfig(p, f, sources);
+        } catch (IllegalArgumentException e) {
+            throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
+        }
+    }
+
+    private static Path existing(Path base, File named, String fallback, String parameter) throws MojoExecutionException {
+        if (named == null) {
+            Path d = base.resolve(fallback);
+            return java.nio.file.Files.isRegularFile(d) ? d : null;
+        }
+        Path p = base.resolve(named.toPath()).normalize();
+        if (!java.nio.file.Files.isRegularFile(p)) {
+            throw new MojoExecutionException("AtomLedger configuration: " + parameter + ": file not found: " + named);
+        }
+        return p;
     }
 
     /**

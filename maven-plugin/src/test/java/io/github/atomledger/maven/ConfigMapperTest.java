@@ -70,4 +70,24 @@ class ConfigMapperTest {
         assertThat(ConfigMapper.toGate(base.toFile(), null, new File("target/previous"), "Regressions").failOn())
                 .isEqualTo(FailScope.REGRESSIONS);
     }
+
+    /** Issue 15: a comma list of structure files and directories, each checked to exist, in order. */
+    @Test
+    void structuresAreACommaListOfExistingFilesAndDirectoriesInOrder() throws Exception {
+        Files.createDirectories(base.resolve("lab/mol"));
+        Files.writeString(base.resolve("lab/chebi.sdf"), "");
+        Files.writeString(base.resolve("structures.tsv"), "");
+        var m = ConfigMapper.mapping("auto", base.toFile(), "structures.tsv, lab/chebi.sdf,lab/mol", 1, "none", 2000, 400)
+                .withSdIdField(" KEGG ID ");
+        assertThat(m.enabled()).isTrue();
+        assertThat(m.structureSources()).containsExactly(base.resolve("structures.tsv"), base.resolve("lab/chebi.sdf"),
+                base.resolve("lab/mol"));
+        assertThat(m.structures()).isEqualTo(base.resolve("structures.tsv"));
+        assertThat(m.sdIdField()).isEqualTo("KEGG ID");
+        assertThatThrownBy(() -> ConfigMapper.mapping("auto", base.toFile(), "structures.tsv,missing.sdf", 1, "none", 2000, 400))
+                .isInstanceOf(MojoExecutionException.class).hasMessageContaining("structures: file not found: missing.sdf");
+        assertThat(ConfigMapper.mapping("auto", base.toFile(), null, 1, "none", 2000, 400).enabled()).isFalse();
+        assertThatThrownBy(() -> ConfigMapper.curatedMaps(base.toFile(), new File("nowhere")))
+                .hasMessageContaining("curatedMaps: not a directory: nowhere");
+    }
 }

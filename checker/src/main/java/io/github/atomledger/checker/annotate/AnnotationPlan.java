@@ -3,6 +3,8 @@ package io.github.atomledger.checker.annotate;
 import io.github.atomledger.checker.transitions.StoredStructure;
 import io.github.atomledger.checker.transitions.TransitionAnnotation;
 import io.github.atomledger.atommapper.mapping.AtomMapper;
+import io.github.atomledger.checker.check.mapping.CuratedVerdict;
+import io.github.atomledger.checker.check.mapping.ImportedMap;
 import io.github.atomledger.checker.check.mapping.MapStatus;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.check.structure.SpeciesStructures;
@@ -18,7 +20,10 @@ import java.util.Map;
  * Which annotations a model should carry after a run: one inferred {@link TransitionAnnotation}
  * for every reaction whose map is proven optimal and unique up to symmetry ({@code mapped}).
  * Ambiguous and best-found maps are not written: choosing among equal answers is a curator's call,
- * and a map written into a model is taken as fact by tracer software downstream.
+ * and a map written into a model is taken as fact by tracer software downstream. Curated maps read
+ * from RXN files ({@code atomledger.curatedMaps}) that are valid carbon maps of the reaction are
+ * planned as curated annotations ({@code origin="curated"}), in place of any inferred one; whether
+ * they replace a curated annotation already in the model is the annotator's {@code overwriteCurated}.
  */
 public final class AnnotationPlan {
 
@@ -42,6 +47,18 @@ public final class AnnotationPlan {
             });
             out.put(r.id(), new TransitionAnnotation(TransitionAnnotation.INFERRED, m.status().label(), m.cost(),
                     AtomMapper.VERSION, m.carbons(), m.mappedSmiles(), used));
+        }
+        for (ReactionResult r : model.reactions()) {
+            ImportedMap file = model.mapping().imported().get(r.id());
+            CuratedVerdict verdict = model.mapping().curated().get(r.id());
+            if (file == null || !file.read() || verdict == null || !verdict.valid()) {
+                continue;
+            }
+            List<StoredStructure> used = new ArrayList<>();
+            new java.util.TreeSet<>(r.reaction().participants().stream().map(p -> p.species()).toList()).forEach(species ->
+                    structures.get(species).ifPresent(s -> used.add(new StoredStructure(species, s.structure().fingerprint(),
+                            s.structure().source().equals(s.text()) && !s.text().startsWith("InChI=") ? s.text() : ""))));
+            out.put(r.id(), new TransitionAnnotation(TransitionAnnotation.CURATED, "", -1, "", file.carbons(), "", used));
         }
         return out;
     }

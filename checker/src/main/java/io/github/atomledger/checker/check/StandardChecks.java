@@ -20,6 +20,8 @@ import io.github.atomledger.checker.check.mapping.CuratedMapCheck;
 import io.github.atomledger.checker.check.mapping.MappingStatusCheck;
 import io.github.atomledger.checker.check.mapping.StaleMapCheck;
 import io.github.atomledger.checker.check.mapping.StructureMissingCheck;
+import io.github.atomledger.checker.check.mapping.GenericSpeciesCheck;
+import io.github.atomledger.checker.check.mapping.CuratedFileCheck;
 import io.github.atomledger.checker.check.mapping.StructureSourceCheck;
 
 import java.util.ArrayList;
@@ -54,8 +56,10 @@ public final class StandardChecks {
                 StructureFormulaCheck.protonation()));
         all.addAll(StructureSourceCheck.all());
         all.add(new StructureMissingCheck());
+        all.add(new GenericSpeciesCheck());
         all.addAll(MappingStatusCheck.all());
         all.addAll(CuratedMapCheck.all());
+        all.add(new CuratedFileCheck());
         all.add(new StaleMapCheck());
         return List.copyOf(all);
     }

@@ -4,6 +4,7 @@ import io.github.atomledger.atommapper.formula.Rational;
 import io.github.atomledger.atommapper.mapping.AtomRef;
 import io.github.atomledger.atommapper.mapping.AtomTransition;
 import io.github.atomledger.checker.check.Finding;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.check.balance.Deltas;
 import io.github.atomledger.checker.check.balance.ReactionBalance;
@@ -132,7 +133,8 @@ public final class ReleaseDiff {
                         + ") is new in this release.", Map.of("class", r.reactionClass().label())));
             }
             balance(p, r, file).ifPresent(out::add);
-            transitions(r, previousCarbons.get(r.id()), currentCarbons.get(r.id()), file).ifPresent(out::add);
+            transitions(r, previousCarbons.get(r.id()), currentCarbons.get(r.id()), file,
+                    current.mapping().structures()).ifPresent(out::add);
         }
         for (ReactionResult p : before.values()) {
             if (!now.containsKey(p.id())) {
@@ -182,7 +184,8 @@ public final class ReleaseDiff {
     }
 
     private static java.util.Optional<Finding> transitions(ReactionResult r, List<AtomTransition> before,
-                                                           List<AtomTransition> now, String file) {
+                                                           List<AtomTransition> now, String file,
+                                                           SpeciesStructures names) {
         if (before == null || before.isEmpty()) {
             return java.util.Optional.empty();
         }
@@ -198,7 +201,9 @@ public final class ReleaseDiff {
             if (!a.equals(b)) {
                 data.put("moved." + from, a + " -> " + b);
                 if (named.size() < MESSAGE_ATOMS) {
-                    named.add(from + " to " + b + " instead of " + a);
+                    // Messages name atoms by their readable labels (the current structures'); data keeps indices.
+                    named.add(names.name(from) + " to " + (is.containsKey(from) ? names.name(is.get(from)) : "none")
+                            + " instead of " + (was.containsKey(from) ? names.name(was.get(from)) : "none"));
                 }
             }
         }

@@ -14,6 +14,10 @@ import io.github.atomledger.checker.model.LoadOptions;
 import io.github.atomledger.checker.model.ModelLoader;
 import io.github.atomledger.checker.model.ModelView;
 import io.github.atomledger.checker.model.ReactionInfo;
+import io.github.atomledger.checker.trace.Pathway;
+import io.github.atomledger.checker.trace.TraceInputs;
+import io.github.atomledger.checker.trace.TraceResults;
+import io.github.atomledger.checker.trace.Traces;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -53,27 +57,55 @@ public final class Engine {
     public RunResult run(RunConfig config, RunListener listener) {
         List<Path> files = ModelLocator.locate(config.baseDirectory(), config.models());
         ModelLoader loader = new ModelLoader(new LoadOptions(config.maxModelBytes()));
+        TraceInputs traces = traceInputs(config, listener);
         List<ModelResult> results = new ArrayList<>();
         for (Path file : files) {
             String display = ModelLocator.relative(config.baseDirectory(), file);
             listener.debug("reading " + display);
             ModelView model = loader.load(file, display);
-            results.add(check(model, file, config, listener));
+            results.add(check(model, file, config, listener, traces));
         }
+        warnUntraced(traces, results, listener);
         return new RunResult(config, results);
+    }
+
+    /** The pathways, fates and label sources to trace; none (with a warning) when mapping is off. */
+    private static TraceInputs traceInputs(RunConfig config, RunListener listener) {
+        if (!config.traces().active()) {
+            return TraceInputs.NONE;
+        }
+        TraceInputs inputs = TraceInputs.load(config.traces(), config.baseDirectory());
+        if (!config.mapping().enabled()) {
+            listener.warn("pathways, fates and tracers need atom maps: set structures (or mapping=on); nothing is traced");
+            return TraceInputs.NONE;
+        }
+        return inputs;
+    }
+
+    private static void warnUntraced(TraceInputs traces, List<ModelResult> results, RunListener listener) {
+        for (Pathway p : traces.pathways()) {
+            boolean traced = results.stream().anyMatch(m -> m.traces().pathways().stream()
+                    .anyMatch(t -> t.pathway().name().equals(p.name())));
+            if (!traced) {
+                listener.warn("pathway " + p.name() + " (" + p.where() + "): "
+                        + (p.model().isEmpty() ? "no model checked has its source " + p.source()
+                        : "its model " + p.model() + " was not checked") + "; not traced");
+            }
+        }
     }
 
     /** Checks one loaded model without atom mapping. */
     public ModelResult check(ModelView model, SeverityPolicy policy) {
-        return check(model, null, policy, MappingConfig.OFF, RunListener.SILENT, null, 0);
+        return check(model, null, policy, MappingConfig.OFF, RunListener.SILENT, null, 0, TraceInputs.NONE);
     }
 
-    private ModelResult check(ModelView model, Path file, RunConfig config, RunListener listener) {
-        return check(model, file, config.policy(), config.mapping(), listener, config.baseDirectory(), config.maxModelBytes());
+    private ModelResult check(ModelView model, Path file, RunConfig config, RunListener listener, TraceInputs traces) {
+        return check(model, file, config.policy(), config.mapping(), listener, config.baseDirectory(), config.maxModelBytes(),
+                traces);
     }
 
     private ModelResult check(ModelView model, Path file, SeverityPolicy policy, MappingConfig mappingConfig,
-                              RunListener listener, Path base, long maxBytes) {
+                              RunListener listener, Path base, long maxBytes, TraceInputs traceInputs) {
         BalanceCalculator calculator = new BalanceCalculator();
         Map<String, SpeciesChemistry> chemistry = calculator.chemistry(model);
         Map<String, ReactionBalance> balances = calculator.balances(model, chemistry);
@@ -114,6 +146,13 @@ public final class Engine {
                 });
             }
         }
+        // Traces walk the maps after the checks: model -> maps -> checks and traces -> reports.
+        TraceResults traces = Traces.run(model, mapping, traceInputs);
+        for (Finding f : traces.findings()) {
+            if (!policy.switchedOff(f.ruleId())) {
+                policy.apply(f, null).ifPresent(modelFindings::add);
+            }
+        }
         List<ReactionResult> reactions = new ArrayList<>();
         java.util.Set<String> done = new java.util.HashSet<>();
         for (ReactionInfo r : model.reactions()) {
@@ -123,6 +162,6 @@ public final class Engine {
             reactions.add(new ReactionResult(r, balances.get(r.id()), byReaction.getOrDefault(r.id(), List.of()),
                     mapping.mapping(r.id()).orElse(null)));
         }
-        return new ModelResult(model, reactions, modelFindings, mapping);
+        return new ModelResult(model, reactions, modelFindings, mapping, traces);
     }
 }

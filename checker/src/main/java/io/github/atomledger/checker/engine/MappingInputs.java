@@ -19,13 +19,21 @@ import java.util.TreeMap;
 import java.util.TreeSet;
 
 /** Turns a model reaction into mapper input, or into the status that makes mapping pointless. */
-final class MappingInputs {
+public final class MappingInputs {
 
     /** Only reactions that conserve atoms by nature are mapped. */
-    private static final Set<ReactionClass> MAPPED_CLASSES =
-            Set.of(ReactionClass.INTERNAL, ReactionClass.TRANSPORT, ReactionClass.ATP_MAINTENANCE);
+    private static final Set<ReactionClass> MAPPED_CLASSES = io.github.atomledger.checker.check.mapping.Coverage.MAPPED_CLASSES;
 
     private MappingInputs() {
+    }
+
+    /**
+     * The mapper's input for a reaction, exactly as the mapping stage builds it (species merged per
+     * side, copies by coefficient), or empty when the reaction is not mapped (its class, a missing
+     * structure, a coefficient that is not a small whole number). For exports of finished runs.
+     */
+    public static java.util.Optional<ReactionInput> inputOf(ReactionInfo r, ReactionBalance b, SpeciesStructures structures) {
+        return java.util.Optional.ofNullable(prepare(r, b, structures).input());
     }
 
     static MappingStage.Prepared prepare(ReactionInfo r, ReactionBalance b, SpeciesStructures structures) {

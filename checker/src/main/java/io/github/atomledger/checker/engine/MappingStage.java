@@ -17,7 +17,8 @@ import io.github.atomledger.checker.check.mapping.MappingData;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.check.structure.StructureResolver;
-import io.github.atomledger.checker.check.structure.StructureTable;
+import io.github.atomledger.checker.check.structure.StructureLibrary;
+import io.github.atomledger.checker.check.mapping.ImportedMap;
 import io.github.atomledger.checker.model.ModelView;
 import io.github.atomledger.checker.model.ReactionInfo;
 
@@ -86,9 +87,9 @@ final class MappingStage {
                 }
             }
         });
-        StructureTable table = config.structures() == null ? StructureTable.empty()
-                : StructureTable.load(config.structures(), ModelLocator.relative(baseDirectory, config.structures()));
-        SpeciesStructures structures = new StructureResolver().resolve(model, table, storedSmiles);
+        StructureLibrary library = StructureLibrary.load(config.structureSources(), baseDirectory, config.sdIdField(),
+                config.cacheDirectory() == null ? null : config.cacheDirectory());
+        SpeciesStructures structures = new StructureResolver().resolve(model, library, storedSmiles);
 
         Map<String, ReactionMapping> results = new LinkedHashMap<>();
         Map<String, ReactionInput> inputs = new LinkedHashMap<>();
@@ -127,7 +128,16 @@ final class MappingStage {
                 }
             }
         });
-        return new MappingData(true, results, curated, stored, structures);
+        // Curated RXN files: judged like curated maps in the model, and in their place.
+        Map<String, ImportedMap> imported = config.curatedMaps() == null ? Map.of()
+                : CuratedFiles.read(config.curatedMaps(), baseDirectory, model, inputs, results);
+        imported.forEach((id, m) -> {
+            if (m.read()) {
+                curated.put(id, m.problems().isEmpty() ? CuratedMaps.judge(mapper, inputs.get(id), results.get(id), m.carbons())
+                        : new CuratedVerdict(id, m.problems(), false, -1, List.of()));
+            }
+        });
+        return new MappingData(true, results, curated, stored, structures, imported);
     }
 
     private record Job(String reactionId, ReactionInput input, String key) {

@@ -3,6 +3,7 @@ package io.github.atomledger.checker.engine;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.mapping.MappingData;
 import io.github.atomledger.checker.model.ModelView;
+import io.github.atomledger.checker.trace.TraceResults;
 
 import java.util.List;
 import java.util.Objects;
@@ -15,12 +16,20 @@ import java.util.stream.Stream;
  * @param reactions     one result per reaction, in document order
  * @param modelFindings findings about species or the model itself (not a reaction), sorted
  * @param mapping       atom maps and structures ({@link MappingData#NONE} when mapping was off)
+ * @param traces        pathway traces, declared-fate outcomes and label reach ({@link TraceResults#NONE}
+ *                      when nothing was traced); their findings are among {@code modelFindings}
  */
 public record ModelResult(ModelView model, List<ReactionResult> reactions, List<Finding> modelFindings,
-                          MappingData mapping) {
+                          MappingData mapping, TraceResults traces) {
+
+    /** A result without traces. */
+    public ModelResult(ModelView model, List<ReactionResult> reactions, List<Finding> modelFindings, MappingData mapping) {
+        this(model, reactions, modelFindings, mapping, TraceResults.NONE);
+    }
 
     public ModelResult {
         Objects.requireNonNull(model, "model");
+        traces = traces == null ? TraceResults.NONE : traces;
         reactions = List.copyOf(reactions);
         modelFindings = modelFindings.stream().sorted(Finding.ORDER).toList();
     }

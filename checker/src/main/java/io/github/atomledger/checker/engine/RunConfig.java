@@ -1,6 +1,7 @@
 package io.github.atomledger.checker.engine;
 
 import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.trace.TraceConfig;
 
 import java.nio.file.Path;
 import java.util.List;
@@ -20,10 +21,12 @@ import java.util.Set;
  * @param policy          severity overrides
  * @param maxModelBytes   the most bytes of XML read from one model file (after decompression)
  * @param mapping         atom mapping settings ({@link MappingConfig#OFF} to skip mapping)
+ * @param traces          pathways, declared fates and label sources to trace ({@link TraceConfig#NONE}
+ *                        for none; tracing needs mapping)
  */
 public record RunConfig(Path baseDirectory, List<String> models, Path reportDirectory, Severity failOn,
                         Set<ReportFormat> formats, SeverityPolicy policy, long maxModelBytes,
-                        MappingConfig mapping) {
+                        MappingConfig mapping, TraceConfig traces) {
 
     /** The default model patterns: every .xml and .xml.gz file below {@code models/}. */
     public static final List<String> DEFAULT_MODELS = List.of("models/**.{xml,xml.gz}");
@@ -38,9 +41,16 @@ public record RunConfig(Path baseDirectory, List<String> models, Path reportDire
         formats = Set.copyOf(formats);
         Objects.requireNonNull(policy, "policy");
         Objects.requireNonNull(mapping, "mapping");
+        traces = traces == null ? TraceConfig.NONE : traces;
         if (maxModelBytes <= 0) {
             throw new IllegalArgumentException("maxModelBytes must be positive, was " + maxModelBytes);
         }
+    }
+
+    /** A configuration without traces. */
+    public RunConfig(Path baseDirectory, List<String> models, Path reportDirectory, Severity failOn,
+                     Set<ReportFormat> formats, SeverityPolicy policy, long maxModelBytes, MappingConfig mapping) {
+        this(baseDirectory, models, reportDirectory, failOn, formats, policy, maxModelBytes, mapping, TraceConfig.NONE);
     }
 
     /** A configuration with defaults for everything but the base directory and models. */
@@ -50,14 +60,18 @@ public record RunConfig(Path baseDirectory, List<String> models, Path reportDire
     }
 
     public RunConfig withFormats(Set<ReportFormat> newFormats) {
-        return new RunConfig(baseDirectory, models, reportDirectory, failOn, newFormats, policy, maxModelBytes, mapping);
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, newFormats, policy, maxModelBytes, mapping, traces);
     }
 
     public RunConfig withPolicy(SeverityPolicy newPolicy) {
-        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, newPolicy, maxModelBytes, mapping);
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, newPolicy, maxModelBytes, mapping, traces);
     }
 
     public RunConfig withMapping(MappingConfig newMapping) {
-        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, policy, maxModelBytes, newMapping);
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, policy, maxModelBytes, newMapping, traces);
+    }
+
+    public RunConfig withTraces(TraceConfig newTraces) {
+        return new RunConfig(baseDirectory, models, reportDirectory, failOn, formats, policy, maxModelBytes, mapping, newTraces);
     }
 }

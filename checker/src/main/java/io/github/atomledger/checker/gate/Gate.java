@@ -167,7 +167,7 @@ public final class Gate {
                     reactions.add(new ReactionResult(r.reaction(), r.balance(), all, r.mapping()));
                 }
             }
-            models.add(new ModelResult(m.model(), reactions, modelLevel, m.mapping()));
+            models.add(new ModelResult(m.model(), reactions, modelLevel, m.mapping(), m.traces()));
         }
         return new RunResult(run.config(), models, run.gate());
     }

@@ -183,7 +183,8 @@ public final class ModelLoader {
         }
         return new SpeciesInfo(s.getId(), s.getName(), s.getCompartment(), s.getBoundaryCondition(),
                 raw == null ? "" : raw.sboTerm(), formula, formulaSource, charge, chargeSource,
-                raw == null ? List.of() : raw.inchis(), raw == null ? 0 : raw.line());
+                raw == null ? List.of() : raw.inchis(), raw == null ? 0 : raw.line(), notes,
+                raw == null ? List.of() : raw.references());
     }
 
     private static ReactionInfo reaction(Reaction r, RawReaction raw, int level) {

@@ -1,6 +1,7 @@
 package io.github.atomledger.checker.model;
 
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 
 /**
@@ -17,11 +18,25 @@ import java.util.Objects;
  * @param chargeSource  where {@code chargeText} came from
  * @param inchis        InChI strings from the species' MIRIAM annotation, in document order
  * @param line          1-based line of the species start tag, 0 when unknown
+ * @param notes         the {@code KEY: value} lines of the species' notes (keys upper-cased, first
+ *                      occurrence wins), for example {@code SMILES}, {@code INCHI}, {@code FORMULA}
+ * @param references    the URIs of the species' MIRIAM annotation under {@code bqbiol:is} or
+ *                      {@code bqmodel:is}, exactly as written, in document order without repeats
+ *                      (identifiers.org cross-references such as
+ *                      {@code https://identifiers.org/chebi/CHEBI:15361})
  */
 public record SpeciesInfo(String id, String name, String compartment, boolean boundary, String sboTerm,
                           String formulaText, FormulaSource formulaSource,
                           String chargeText, FormulaSource chargeSource,
-                          List<String> inchis, int line) {
+                          List<String> inchis, int line, Map<String, String> notes, List<String> references) {
+
+    /** A species without notes or cross-references. */
+    public SpeciesInfo(String id, String name, String compartment, boolean boundary, String sboTerm,
+                       String formulaText, FormulaSource formulaSource, String chargeText, FormulaSource chargeSource,
+                       List<String> inchis, int line) {
+        this(id, name, compartment, boundary, sboTerm, formulaText, formulaSource, chargeText, chargeSource, inchis,
+                line, Map.of(), List.of());
+    }
 
     public SpeciesInfo {
         Objects.requireNonNull(id, "id");
@@ -31,5 +46,7 @@ public record SpeciesInfo(String id, String name, String compartment, boolean bo
         Objects.requireNonNull(formulaSource, "formulaSource");
         Objects.requireNonNull(chargeSource, "chargeSource");
         inchis = List.copyOf(inchis);
+        notes = Map.copyOf(notes);
+        references = List.copyOf(references);
     }
 }

@@ -60,6 +60,7 @@ public final class ConsoleSummary {
                 out.add("  " + mappingLine(m));
                 example(m).ifPresent(out::add);
             }
+            out.addAll(TraceConsole.lines(result, m, threshold));
             int shown = 0;
             int hidden = 0;
             for (ReactionResult r : m.reactions()) {
@@ -79,7 +80,8 @@ public final class ConsoleSummary {
                 out.add("  ... and " + hidden + " more reaction(s); see the report");
             }
             for (Finding f : m.modelFindings()) {
-                if (f.severity().atLeast(threshold) && result.gate().mayFail(f)) {
+                // Trace findings are shown under their pathway (TraceConsole).
+                if (f.severity().atLeast(threshold) && result.gate().mayFail(f) && !TraceConsole.isTrace(f)) {
                     out.add("  " + f.elementId() + "  [" + f.ruleId() + "] " + f.message());
                 }
             }
@@ -141,7 +143,8 @@ public final class ConsoleSummary {
             return java.util.Optional.empty();
         }
         return java.util.Optional.of("  example " + best.id() + " carbons: "
-                + String.join("; ", io.github.atomledger.checker.transitions.CarbonMapText.format(best.mapping().carbons())));
+                + String.join("; ", io.github.atomledger.checker.transitions.CarbonMapText.format(best.mapping().carbons(),
+                m.mapping().structures()::label)));
     }
 
     static String reactionLine(ReactionResult r, List<Finding> bad) {

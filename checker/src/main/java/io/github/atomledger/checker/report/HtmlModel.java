@@ -18,6 +18,7 @@ final class HtmlModel {
     private final Map<String, MapPicture> maps;
     private final String idPrefix;
     private final int[] pictureBudget;
+    private final int[] traceBudget = {HtmlTraces.MAX_STEP_PICTURES};
 
     HtmlModel(XmlOut x, ModelResult m, Map<String, MapPicture> maps, String idPrefix, int[] pictureBudget) {
         this.pictureBudget = pictureBudget;
@@ -36,8 +37,11 @@ final class HtmlModel {
         x.text(" ").leaf("span", "tag", "SBML L" + m.model().level() + "V" + m.model().version()
                 + (m.model().fbcVersion() > 0 ? " fbc v" + m.model().fbcVersion() : ""));
         x.end().nl();
-        cards();
+        HtmlCoverage coverage = new HtmlCoverage(x, m);
+        cards(coverage);
+        coverage.details();
         modelFindings();
+        new HtmlTraces(x, m, idPrefix, traceBudget).write();
         Map<String, SpeciesChemistry> chemistry = BalanceTable.chemistry(m.model());
         for (ReactionResult r : m.reactions()) {
             MapPicture map = maps.get(r.id());
@@ -50,7 +54,7 @@ final class HtmlModel {
         x.end().nl();
     }
 
-    private void cards() throws XMLStreamException {
+    private void cards(HtmlCoverage coverage) throws XMLStreamException {
         List<Finding> all = m.allFindings();
         x.start("div", "cards").nl();
 
@@ -85,6 +89,8 @@ final class HtmlModel {
             table(st, null);
             x.end().nl();
         }
+
+        coverage.card();
 
         x.start("div", "card").leaf("h3", null, "findings by rule");
         table(HtmlReporter.countBy(all.stream().map(Finding::ruleId).toList()), all.isEmpty() ? "none" : null);

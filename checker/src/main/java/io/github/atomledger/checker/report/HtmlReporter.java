@@ -111,8 +111,8 @@ public final class HtmlReporter implements Reporter {
             x.empty("meta").attr("name", "viewport").attr("content", "width=device-width, initial-scale=1").nl();
             x.empty("meta").attr("name", "generator").attr("content", "AtomLedger " + Version.get()).nl();
             x.leaf("title", null, "AtomLedger report").nl();
-            x.start("style").text(HtmlStyle.BASE).text(HtmlStyle.filters(severities, ruleTokens,
-                    new ArrayList<>(statuses))).end().nl();
+            x.start("style").text(HtmlStyle.BASE).text(HtmlTraces.STYLE).text(HtmlStyle.filters(severities, ruleTokens,
+                    new ArrayList<>(statuses))).text(HtmlTraces.filters(severities, ruleTokens)).end().nl();
             x.end().nl();
             x.start("body").nl();
             header(x, result);

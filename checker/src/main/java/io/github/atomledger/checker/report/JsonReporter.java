@@ -4,7 +4,9 @@ import io.github.atomledger.checker.engine.ReportFormat;
 import io.github.atomledger.atommapper.formula.Rational;
 import io.github.atomledger.atommapper.mapping.AtomRef;
 import io.github.atomledger.atommapper.mapping.AtomTransition;
+import io.github.atomledger.checker.check.mapping.Coverage;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.Version;
 import io.github.atomledger.checker.baseline.BaselineMatch;
 import io.github.atomledger.checker.check.Finding;
@@ -133,16 +135,52 @@ public final class JsonReporter implements Reporter {
             summary.put("mapping", null);
         }
         o.put("summary", summary);
+        if (m.mapping().enabled()) {
+            o.put("coverage", coverage(m));
+        }
         o.put("findings", findings(m.modelFindings(), gate));
         List<Object> reactions = new ArrayList<>();
         for (ReactionResult r : m.reactions()) {
-            reactions.add(reaction(r, gate));
+            reactions.add(reaction(r, gate, m.mapping().structures()));
         }
         o.put("reactions", reactions);
         return o;
     }
 
-    private static Map<String, Object> reaction(ReactionResult r, GateMarks gate) {
+    /** Structure coverage (issue 15): documented in docs/report-schema.json, {@code $defs/coverage}. */
+    private static Map<String, Object> coverage(ModelResult m) {
+        Map<String, ReactionResult> byId = new LinkedHashMap<>();
+        m.reactions().forEach(r -> byId.putIfAbsent(r.id(), r));
+        Coverage c = Coverage.of(m.model(), m.mapping(), id -> byId.get(id).reactionClass());
+        Map<String, Object> o = new LinkedHashMap<>();
+        o.put("considered", c.considered());
+        o.put("mappable", c.mappable());
+        o.put("blocked", c.blocked());
+        o.put("blockedOnlyByGeneric", c.blockedByGenericOnly());
+        o.put("sources", new TreeMap<>(c.sources()));
+        List<Object> missing = new ArrayList<>();
+        for (Coverage.Missing x : c.missing()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("species", x.species());
+            e.put("unblocks", x.unblocks());
+            e.put("blocks", x.blocks());
+            e.put("reactions", x.reactions());
+            missing.add(e);
+        }
+        o.put("missing", missing);
+        List<Object> generic = new ArrayList<>();
+        for (Coverage.Generic g : c.generic()) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("species", g.species());
+            e.put("reason", g.reason());
+            e.put("blocks", g.blocks());
+            generic.add(e);
+        }
+        o.put("generic", generic);
+        return o;
+    }
+
+    private static Map<String, Object> reaction(ReactionResult r, GateMarks gate, SpeciesStructures structures) {
         Map<String, Object> o = new LinkedHashMap<>();
         ReactionBalance b = r.balance();
         o.put("id", r.id());
@@ -161,19 +199,19 @@ public final class JsonReporter implements Reporter {
         balance.put("elements", b.elementsComputable() ? elements : null);
         balance.put("charge", b.charge() == null ? null : b.charge().toString());
         o.put("balance", balance);
-        o.put("mapping", r.mapping() == null ? null : mapping(r.mapping()));
+        o.put("mapping", r.mapping() == null ? null : mapping(r.mapping(), structures));
         o.put("findings", findings(r.findings(), gate));
         return o;
     }
 
-    private static Map<String, Object> mapping(ReactionMapping m) {
+    private static Map<String, Object> mapping(ReactionMapping m, SpeciesStructures structures) {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("status", m.status().label());
-        o.put("carbon", transitions(m.carbons()));
+        o.put("carbon", transitions(m.carbons(), structures));
         o.put("cost", m.cost() < 0 ? null : m.cost());
         o.put("lowerBound", m.lowerBound() < 0 ? null : m.lowerBound());
         List<Object> alternatives = new ArrayList<>();
-        m.alternatives().forEach(a -> alternatives.add(transitions(a)));
+        m.alternatives().forEach(a -> alternatives.add(transitions(a, structures)));
         o.put("alternatives", alternatives);
         o.put("mappedSmiles", m.mappedSmiles().isEmpty() ? null : m.mappedSmiles());
         o.put("stereoNotes", m.stereoNotes());
@@ -186,22 +224,24 @@ public final class JsonReporter implements Reporter {
         return o;
     }
 
-    private static List<Object> transitions(List<AtomTransition> list) {
+    private static List<Object> transitions(List<AtomTransition> list, SpeciesStructures structures) {
         List<Object> out = new ArrayList<>();
         for (AtomTransition t : list) {
             Map<String, Object> o = new LinkedHashMap<>();
-            o.put("from", atom(t.from()));
-            o.put("to", atom(t.to()));
+            o.put("from", atom(t.from(), structures));
+            o.put("to", atom(t.to(), structures));
             out.add(o);
         }
         return out;
     }
 
-    private static Map<String, Object> atom(AtomRef a) {
+    private static Map<String, Object> atom(AtomRef a, SpeciesStructures structures) {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("species", a.species());
         o.put("copy", a.copy());
         o.put("atom", a.atom());
+        // The readable position from the structure's atom class ("C3"), else the index as text (#14).
+        o.put("label", structures.label(a.species(), a.atom()));
         return o;
     }
 

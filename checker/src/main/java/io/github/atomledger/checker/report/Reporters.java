@@ -60,12 +60,18 @@ public final class Reporters {
                 throw new IllegalArgumentException("report format '" + f.label() + "' is not available in this version");
             }
             list.add(f == ReportFormat.HTML ? new HtmlReporter(mappings) : s.get());
+            if (f == ReportFormat.JSON) {
+                // The traces' machine files travel with the JSON report (written only when something was traced).
+                list.add(new TracesReporter());
+                list.add(new ReachReporter());
+            }
         }
         return new Reporters(list);
     }
 
     /**
-     * Writes every report; returns the paths written, in format order.
+     * Writes every report; returns the paths written, in format order (reports with nothing to
+     * say write nothing).
      *
      * @throws IOException when a report could not be written (after every other report was)
      */
@@ -113,14 +119,14 @@ public final class Reporters {
         for (Object o : outcomes) {
             if (o instanceof Path p) {
                 written.add(p);
-            } else {
-                failures.add((Failure) o);
+            } else if (o instanceof Failure f) {
+                failures.add(f);
             }
         }
         return new Outcome(written, failures);
     }
 
-    /** The file written, or the {@link Failure}. */
+    /** The file written (null when the report had nothing to write), or the {@link Failure}. */
     private static Object writeOne(Reporter r, RunResult result, Path directory) {
         try {
             return r.write(result, directory);

@@ -89,7 +89,8 @@ public final class SarifReporter implements Reporter {
             rules.put(c.ruleId(), rule(c.ruleId(), c.description(), c.defaultSeverity()));
         }
         for (Finding f : findings) {
-            rules.computeIfAbsent(f.ruleId(), id -> rule(id, "AtomLedger rule " + id + ".", f.severity()));
+            rules.computeIfAbsent(f.ruleId(), id -> rule(id, io.github.atomledger.checker.trace.FateCheck.DESCRIPTIONS
+                    .getOrDefault(id, "AtomLedger rule " + id + "."), f.severity()));
         }
         return rules;
     }

@@ -28,6 +28,16 @@ public final class CarbonMapText {
 
     /** Formats carbon transitions, one line each, without indentation or trailing newline. */
     public static List<String> format(List<AtomTransition> transitions) {
+        return format(transitions, (species, atom) -> Integer.toString(atom));
+    }
+
+    /**
+     * Formats carbon transitions for people, as {@link #format(List)} does but naming each atom
+     * with {@code names} (species id, 1-based atom index; usually the structure's readable label,
+     * "C3"). Stored annotations keep the indices ({@link #format(List)}); this form is not parsed.
+     */
+    public static List<String> format(List<AtomTransition> transitions,
+                                      java.util.function.BiFunction<String, Integer, String> names) {
         Map<String, List<AtomTransition>> groups = new TreeMap<>();
         for (AtomTransition t : transitions) {
             groups.computeIfAbsent(ref(t.from()) + "\u0000" + ref(t.to()), k -> new ArrayList<>()).add(t);
@@ -38,8 +48,8 @@ public final class CarbonMapText {
             StringBuilder from = new StringBuilder(ref(sorted.get(0).from())).append(':');
             StringBuilder to = new StringBuilder(ref(sorted.get(0).to())).append(':');
             for (AtomTransition t : sorted) {
-                from.append(' ').append(t.from().atom());
-                to.append(' ').append(t.to().atom());
+                from.append(' ').append(names.apply(t.from().species(), t.from().atom()));
+                to.append(' ').append(names.apply(t.to().species(), t.to().atom()));
             }
             lines.add(from + " = " + to);
         }

@@ -68,7 +68,7 @@ class MappingStageTest {
         try (Stream<Path> files = Files.walk(cache)) {
             entries = files.filter(p -> p.toString().endsWith(".json")).count();
         }
-        assertThat(entries).isEqualTo(35);
+        assertThat(entries).isEqualTo(53);
         String warm = json.toJson(new Engine().run(config(2, cache), RunListener.SILENT));
         String single = json.toJson(new Engine().run(config(1, null), RunListener.SILENT));
         assertThat(warm).isEqualTo(cold);
@@ -84,6 +84,6 @@ class MappingStageTest {
             }
         }
         ModelResult m = new Engine().run(config(2, cache), RunListener.SILENT).models().get(0);
-        assertThat(m.reactions().stream().filter(r -> r.mapping().status() == MapStatus.MAPPED).count()).isEqualTo(35);
+        assertThat(m.reactions().stream().filter(r -> r.mapping().status() == MapStatus.MAPPED).count()).isEqualTo(53);
     }
 }

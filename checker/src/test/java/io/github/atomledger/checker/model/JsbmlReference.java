@@ -47,7 +47,8 @@ final class JsbmlReference {
         }
         for (Species s : model.getListOfSpecies()) {
             out.add("species " + s.getId() + " '" + orId(s.getName(), s.getId()) + "' in " + s.getCompartment()
-                    + " boundary " + s.getBoundaryCondition() + " sbo '" + (s.isSetSBOTerm() ? s.getSBOTermID() : "") + "'");
+                    + " boundary " + s.getBoundaryCondition() + " sbo '" + (s.isSetSBOTerm() ? s.getSBOTermID() : "") + "'"
+                    + " is " + isReferences(s));
         }
         for (Reaction r : model.getListOfReactions()) {
             List<String> modifiers = new ArrayList<>();
@@ -70,12 +71,23 @@ final class JsbmlReference {
         }
         for (SpeciesInfo s : view.species()) {
             out.add("species " + s.id() + " '" + s.name() + "' in " + s.compartment() + " boundary " + s.boundary()
-                    + " sbo '" + s.sboTerm() + "'");
+                    + " sbo '" + s.sboTerm() + "'" + " is " + new java.util.TreeSet<>(s.references()));
         }
         for (ReactionInfo r : view.reactions()) {
             out.add("reaction " + r.id() + " '" + r.name() + "' reversible " + r.reversible() + " sbo '" + r.sboTerm()
                     + "' reactants " + participants(r.reactants(), view.level()) + " products "
                     + participants(r.products(), view.level()) + " modifiers " + r.modifiers());
+        }
+        return out;
+    }
+
+    /** The resources of the species' MIRIAM "is" terms (biology or model qualifier), as JSBML reads them (issue 15). */
+    private static java.util.TreeSet<String> isReferences(Species s) {
+        java.util.TreeSet<String> out = new java.util.TreeSet<>();
+        for (org.sbml.jsbml.CVTerm t : s.getCVTerms()) {
+            if (t.getQualifier() == org.sbml.jsbml.CVTerm.Qualifier.BQB_IS || t.getQualifier() == org.sbml.jsbml.CVTerm.Qualifier.BQM_IS) {
+                out.addAll(t.getResources());
+            }
         }
         return out;
     }

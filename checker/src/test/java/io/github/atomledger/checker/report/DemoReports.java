@@ -7,6 +7,7 @@ import io.github.atomledger.checker.engine.MappingConfig;
 import io.github.atomledger.checker.engine.RunConfig;
 import io.github.atomledger.checker.engine.RunListener;
 import io.github.atomledger.checker.engine.RunResult;
+import io.github.atomledger.checker.trace.TraceConfig;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -46,7 +47,10 @@ final class DemoReports {
             RunResult plain = run(Path.of("target", "demo-mapped"));
             MappingConfig mapping = new MappingConfig(true, DEMO.resolve("structures.tsv"), MappingOptions.defaults()
                     .withTimeBudget(java.time.Duration.ofMinutes(2)).withNodeLimit(NODE_LIMIT), 2, null);
-            mapped = new Engine().run(plain.config().withMapping(mapping), RunListener.SILENT);
+            // The demo's pathways, declared fates and label source, as its pom has them (issue #14).
+            TraceConfig traces = new TraceConfig(DEMO.resolve("models/pathways.tsv"), DEMO.resolve("models/fates.tsv"),
+                    List.of("glc_e:C1"));
+            mapped = new Engine().run(plain.config().withMapping(mapping).withTraces(traces), RunListener.SILENT);
         }
         return mapped;
     }

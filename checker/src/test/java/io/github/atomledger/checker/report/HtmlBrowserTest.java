@@ -82,9 +82,26 @@ class HtmlBrowserTest {
         assumeTrue(!dom.isBlank(), "chromium printed no DOM; skipping the browser test");
         assertThat(dom).contains("AtomLedger report").contains("reactions by class").contains("findings by severity")
                 .contains("atom maps");
-        assertThat(count(dom, "<article")).isEqualTo(43);
+        assertThat(count(dom, "<article")).isEqualTo(64);
         assertThat(count(dom, "<div class=\"pic\" role=\"img\"")).isGreaterThanOrEqualTo(20);
         assertThat(dom).contains("R_FBA").contains("fructose-bisphosphate aldolase");
+    }
+
+    @Test
+    void browserBuildsThePathwaySectionWithItsStepsAndFates() throws Exception {
+        // Issue #14: a section per pathway with its steps drawn in order beside a table of fates.
+        String dom = browse("--dump-dom");
+        assumeTrue(!dom.isBlank(), "chromium printed no DOM; skipping the browser test");
+        assertThat(dom).contains("Carbon traces").contains("Pathway leucine").contains("Pathway phenylalanine")
+                .contains("Where label can go");
+        int start = dom.indexOf("<section class=\"traces\"");
+        String traces = dom.substring(start, dom.indexOf("</section>", start));
+        assertThat(count(traces, "<details class=\"pathway")).isEqualTo(5);
+        assertThat(count(traces, "<table class=\"fates\"")).isEqualTo(5);
+        assertThat(count(traces, "<figure class=\"tpic\"")).isGreaterThanOrEqualTo(25);
+        assertThat(count(traces, "<svg")).isEqualTo(count(traces, "<figure class=\"tpic\""));
+        assertThat(traces).contains("holds").doesNotContain("differs").doesNotContain("Not drawn: the drawing");
+        assertThat(traces.indexOf("R_LEUTA")).isLessThan(traces.indexOf("R_BCKDH")).isLessThan(traces.indexOf("R_HMGCL"));
     }
 
     @Test

@@ -35,6 +35,13 @@ final class JsonSchemas {
         }
     }
 
+    /** The project's docs/traces-schema.json for traces.json and reachability.json (JSON Schema 2020-12). */
+    static Schema traces() throws IOException {
+        try (InputStream in = Files.newInputStream(Path.of("..", "docs", "traces-schema.json"))) {
+            return SchemaRegistry.withDefaultDialect(SpecificationVersion.DRAFT_2020_12).getSchema(in);
+        }
+    }
+
     static List<String> errors(Schema schema, String json) throws IOException {
         JsonNode node = MAPPER.readTree(json);
         return schema.validate(node).stream().map(Error::toString).toList();

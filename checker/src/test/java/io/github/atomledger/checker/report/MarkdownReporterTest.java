@@ -24,7 +24,7 @@ class MarkdownReporterTest {
     @Test
     void demoPassesAndCountsItsModel() {
         String md = new MarkdownReporter().toMarkdown(DemoReports.run(Path.of("target")));
-        assertThat(md).startsWith("## AtomLedger: passed\n").contains("| models/ledgerella\\_central.xml | 43 |");
+        assertThat(md).startsWith("## AtomLedger: passed\n").contains("| models/ledgerella\\_central.xml | 64 |");
     }
 
     @Test

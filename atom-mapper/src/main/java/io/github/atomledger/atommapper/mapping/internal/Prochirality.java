@@ -81,14 +81,19 @@ public final class Prochirality {
                     atoms.sort(null);
                     AtomRef centre = side.ref(off + c);
                     flags.add(new Flag(List.copyOf(atoms), centre.species() + " copy " + centre.copy()
-                            + ": the branches at atoms " + (pair[0] + 1) + " and " + (pair[1] + 1)
-                            + " of prochiral centre " + (c + 1) + " are equivalent by constitution only, "
+                            + ": the branches at atoms " + name(side, m, pair[0]) + " and " + name(side, m, pair[1])
+                            + " of prochiral centre " + name(side, m, c) + " are equivalent by constitution only, "
                             + "and the map sends their carbons to different places; which branch is which "
                             + "is the enzyme's stereospecific choice and needs a curated pin"));
                 }
             }
         }
         return flags;
+    }
+
+    /** The atom's readable label (its atom class, "C3") or its 1-based index. */
+    private static String name(SideGraph side, int molecule, int atom) {
+        return side.structure(molecule).atomLabel(atom + 1);
     }
 
     private static int[] equalPair(MoleculeGraph g, int[] nb) {

@@ -6,6 +6,7 @@ import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
+import io.github.atomledger.checker.check.structure.SpeciesStructures;
 import io.github.atomledger.checker.model.ReactionInfo;
 
 import java.util.ArrayList;
@@ -58,15 +59,25 @@ public final class CuratedMapCheck implements ModelCheck {
             if (v == null) {
                 continue;
             }
+            // Issue 15: a map read from an RXN file says so, and names the file.
+            ImportedMap file = context.mapping().imported().get(r.id());
+            String from = file != null && file.read() ? " (from " + file.file() + ")" : "";
             if (validity && !v.valid()) {
-                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
-                        + " is invalid: " + String.join("; ", v.problems()) + ".",
-                        Map.of("problems", String.join("; ", v.problems()), "problemCount", Integer.toString(v.problems().size()))));
+                Map<String, String> data = new TreeMap<>(Map.of("problems", String.join("; ", v.problems()),
+                        "problemCount", Integer.toString(v.problems().size())));
+                if (!from.isEmpty()) {
+                    data.put("file", file.file());
+                }
+                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id() + from
+                        + " is invalid: " + String.join("; ", v.problems()) + ".", data));
             } else if (!validity && v.valid() && !v.agrees() && !v.differing().isEmpty()) {
                 Map<String, String> data = new TreeMap<>();
                 List<String> moved = new ArrayList<>();
+                List<String> named = new ArrayList<>();
+                SpeciesStructures structures = context.mapping().structures();
                 for (AtomTransition t : v.differing()) {
                     moved.add(t.from() + "->" + t.to());
+                    named.add(structures.name(t.from()) + "->" + structures.name(t.to()));
                 }
                 data.put("differing", String.join(",", moved));
                 data.put("differingCount", Integer.toString(moved.size()));
@@ -76,9 +87,12 @@ public final class CuratedMapCheck implements ModelCheck {
                     data.put("optimum", String.join("; ", CarbonMapText.format(m.carbons())));
                 }
                 String cost = v.extraCost() >= 0 ? " and needs " + v.extraCost() + " more weighted bond edit(s) than the optimum" : "";
-                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
+                if (!from.isEmpty()) {
+                    data.put("file", file.file());
+                }
+                out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id() + from
                         + " differs from the minimum bond-edit map: " + moved.size() + " carbon(s) go elsewhere ("
-                        + String.join(", ", moved.stream().limit(6).toList()) + (moved.size() > 6 ? ", ..." : "") + ")"
+                        + String.join(", ", named.stream().limit(6).toList()) + (moved.size() > 6 ? ", ..." : "") + ")"
                         + cost + ".", data));
             }
         }

@@ -1,5 +1,7 @@
 package io.github.atomledger.checker.check.mapping;
 
+import io.github.atomledger.atommapper.structure.Structure;
+import io.github.atomledger.atommapper.structure.StructureException;
 import io.github.atomledger.checker.transitions.StoredStructure;
 import io.github.atomledger.checker.transitions.TransitionAnnotation;
 import io.github.atomledger.checker.check.CheckContext;
@@ -18,8 +20,9 @@ import java.util.TreeSet;
  * {@code mapping.stale}: a map stored in the model was written for structures that have changed
  * since (their fingerprints differ from the structures used now), so its atom numbers may no
  * longer mean the same atoms. Re-run {@code annotate} (inferred maps) or review the curated map.
- * The same molecule written as another SMILES counts too, because atom numbers follow the SMILES
- * text. Data: {@code species} (comma list), {@code origin}, {@code reason} ("structure-changed"
+ * The same molecule written as another SMILES counts too when it numbers the atoms differently,
+ * because atom numbers follow the SMILES text; a text that only adds or changes atom classes
+ * (readable positions) numbers them alike and is not stale. Data: {@code species} (comma list), {@code origin}, {@code reason} ("structure-changed"
  * or "renumbered").
  */
 public final class StaleMapCheck implements ModelCheck {
@@ -54,7 +57,8 @@ public final class StaleMapCheck implements ModelCheck {
                 String fingerprint = now == null ? "" : now.structure().fingerprint();
                 if (!s.fingerprint().isEmpty() && !fingerprint.equals(s.fingerprint())) {
                     changed.add(s.species());
-                } else if (now != null && !s.smiles().isEmpty() && !s.smiles().strip().equals(now.text().strip())) {
+                } else if (now != null && !s.smiles().isEmpty() && !s.smiles().strip().equals(now.text().strip())
+                        && !numberedAlike(s.smiles(), now.structure())) {
                     // Same molecule, other SMILES text: atom numbers follow the text, so they may have moved.
                     renumbered.add(s.species());
                 }
@@ -74,5 +78,17 @@ public final class StaleMapCheck implements ModelCheck {
                             "reason", changed.isEmpty() ? "renumbered" : "structure-changed")));
         }
         return out;
+    }
+
+    /**
+     * True when the stored SMILES numbers its heavy atoms as the structure used now does, for
+     * example when only atom classes ({@code [CH2:3]}), brackets or stereo marks changed (#14).
+     */
+    private static boolean numberedAlike(String storedSmiles, Structure now) {
+        try {
+            return Structure.fromSmiles(storedSmiles).numberedAlike(now);
+        } catch (StructureException e) {
+            return false;
+        }
     }
 }

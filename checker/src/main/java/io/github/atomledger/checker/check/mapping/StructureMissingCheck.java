@@ -4,18 +4,20 @@ import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
 import io.github.atomledger.checker.check.Severity;
-import io.github.atomledger.checker.model.SpeciesInfo;
 
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.TreeSet;
+import java.util.StringJoiner;
+import java.util.TreeMap;
 
 /**
- * {@code mapping.structure-missing}: a species has no structure from any source, so the reactions
- * it takes part in cannot be mapped. One finding per species, listing the reactions it blocks.
- * Data: {@code reactions}, {@code reactionCount}.
+ * {@code mapping.structure-missing}: species without a structure from any source keep reactions
+ * from being mapped. One finding per model, listing the species ranked by how many reactions each
+ * would unblock on its own (then by how many it takes part in), so a curator knows which
+ * structures to add first. Generic and polymer species are not listed here
+ * ({@link GenericSpeciesCheck}). Data: {@code species}, {@code unblocks}, {@code blocks} (comma
+ * lists in rank order), {@code missingCount}, {@code blockedReactions} (reactions held back by at
+ * least one of them), {@code mappable}, {@code considered} (see {@link Coverage}).
  */
 public final class StructureMissingCheck implements ModelCheck {
 
@@ -26,7 +28,7 @@ public final class StructureMissingCheck implements ModelCheck {
 
     @Override
     public String description() {
-        return "A species has no structure, which blocks atom mapping of its reactions.";
+        return "Species without a structure block atom mapping of their reactions (ranked by reactions unblocked).";
     }
 
     @Override
@@ -34,24 +36,48 @@ public final class StructureMissingCheck implements ModelCheck {
         return Severity.WARNING;
     }
 
+    /** The model's coverage, computed once for the checks that report on it. */
+    static Coverage coverage(CheckContext context) {
+        return context.shared(Coverage.class,
+                () -> Coverage.of(context.model(), context.mapping(), id -> context.balance(id).reactionClass()));
+    }
+
     @Override
     public List<Finding> check(CheckContext context) {
-        Map<String, TreeSet<String>> blocked = new LinkedHashMap<>();
-        context.mapping().mappings().values().stream()
-                .filter(m -> m.status() == MapStatus.NO_STRUCTURE)
-                .sorted(java.util.Comparator.comparing(ReactionMapping::reactionId))
-                .forEach(m -> m.missingStructures().forEach(s -> blocked.computeIfAbsent(s, k -> new TreeSet<>()).add(m.reactionId())));
-        List<Finding> out = new ArrayList<>();
-        for (SpeciesInfo s : context.model().species()) {
-            TreeSet<String> reactions = blocked.get(s.id());
-            if (reactions == null) {
-                continue;
-            }
-            String shown = String.join(", ", reactions.stream().limit(5).toList()) + (reactions.size() > 5 ? ", ..." : "");
-            out.add(context.finding(this, s.id(), s.line(), "Species " + s.id() + " has no structure, so "
-                    + reactions.size() + " reaction(s) cannot be mapped: " + shown + ".",
-                    Map.of("reactions", String.join(",", reactions), "reactionCount", Integer.toString(reactions.size()))));
+        if (!context.mapping().enabled()) {
+            return List.of();
         }
-        return out;
+        Coverage c = coverage(context);
+        if (c.missing().isEmpty()) {
+            return List.of();
+        }
+        StringJoiner species = new StringJoiner(",");
+        StringJoiner unblocks = new StringJoiner(",");
+        StringJoiner blocks = new StringJoiner(",");
+        StringJoiner shown = new StringJoiner(", ");
+        int listed = 0;
+        java.util.Set<String> blockedByMissing = new java.util.TreeSet<>();
+        for (Coverage.Missing m : c.missing()) {
+            species.add(m.species());
+            unblocks.add(Integer.toString(m.unblocks()));
+            blocks.add(Integer.toString(m.blocks()));
+            blockedByMissing.addAll(m.reactions());
+            if (shown.length() < 160) {
+                listed++;
+                shown.add(m.species() + " (" + m.unblocks() + " alone, " + m.blocks() + " in all)");
+            }
+        }
+        Map<String, String> data = new TreeMap<>();
+        data.put("species", species.toString());
+        data.put("unblocks", unblocks.toString());
+        data.put("blocks", blocks.toString());
+        data.put("missingCount", Integer.toString(c.missing().size()));
+        data.put("blockedReactions", Integer.toString(blockedByMissing.size()));
+        data.put("mappable", Integer.toString(c.mappable()));
+        data.put("considered", Integer.toString(c.considered()));
+        String message = c.missing().size() + " species have no structure, which keeps " + blockedByMissing.size()
+                + " of " + c.considered() + " mappable-class reactions from being mapped; the ones that unblock most: "
+                + shown + (c.missing().size() > listed ? " and " + (c.missing().size() - listed) + " more" : "") + ".";
+        return List.of(context.finding(this, context.model().modelId(), 0, message, data));
     }
 }

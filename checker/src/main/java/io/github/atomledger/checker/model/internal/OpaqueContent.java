@@ -10,13 +10,16 @@ import javax.xml.stream.XMLStreamReader;
 /**
  * Reads, from the cursor, what the checks need out of a {@code <notes>} or {@code <annotation>}
  * element that JSBML is never shown: the {@code KEY: value} lines of a species' notes (one per
- * XHTML block, {@code p}, {@code li}, {@code div} or {@code td}) and the InChI strings of its
- * annotation's {@code rdf:resource} URIs. Everything else inside is only walked past. Confined to
- * one {@link RecordingEventReader}.
+ * XHTML block, {@code p}, {@code li}, {@code div} or {@code td}), the InChI strings of its
+ * annotation's {@code rdf:resource} URIs, and the URIs under a MIRIAM {@code is} qualifier
+ * ({@code bqbiol:is}, {@code bqmodel:is}: the cross-references that say what the species is, as
+ * written). Everything else inside is only walked past. Confined to one {@link RecordingEventReader}.
  */
 final class OpaqueContent {
 
     private static final String RDF = "http://www.w3.org/1999/02/22-rdf-syntax-ns#";
+    private static final String BQBIOL = "http://biomodels.net/biology-qualifiers/";
+    private static final String BQMODEL = "http://biomodels.net/model-qualifiers/";
     private static final Pattern FIELD = Pattern.compile("^\\s*([A-Za-z][A-Za-z0-9 _-]*?)\\s*:\\s*(.*?)\\s*$");
 
     /** Depth inside the notes or annotation element (0: outside). */
@@ -24,6 +27,8 @@ final class OpaqueContent {
     private boolean notes;
     private RawSpecies.Builder species;
     private int blockDepth;
+    /** Depth of the open {@code bqbiol:is} or {@code bqmodel:is} element (0: none). */
+    private int isDepth;
     private final StringBuilder blockText = new StringBuilder();
 
     static boolean isOpaque(String localName) {
@@ -53,7 +58,14 @@ final class OpaqueContent {
             }
             return;
         }
+        if (isDepth == 0 && in.getLocalName().equals("is")
+                && (BQBIOL.equals(in.getNamespaceURI()) || BQMODEL.equals(in.getNamespaceURI()))) {
+            isDepth = depth;
+        }
         String uri = in.getAttributeValue(RDF, "resource");
+        if (uri != null && isDepth > 0 && depth > isDepth && !species.references.contains(uri)) {
+            species.references.add(uri);
+        }
         if (uri != null) {
             int at = uri.indexOf("InChI=");
             if (at >= 0 && uri.toLowerCase(Locale.ROOT).contains("inchi")) {
@@ -79,6 +91,9 @@ final class OpaqueContent {
     /** An end tag inside, the notes or annotation end tag included. */
     void end() {
         depth--;
+        if (depth < isDepth) {
+            isDepth = 0;
+        }
         if (blockDepth > 0 && --blockDepth == 0) {
             endBlock();
         }

@@ -12,13 +12,16 @@ import java.util.TreeMap;
  * @param sboTerm the SBO term as {@code "SBO:0000247"}, or "" when unset or not of that form
  * @param notes   {@code KEY: value} lines of the notes (keys upper-cased, first occurrence wins)
  * @param inchis  InChI strings from {@code rdf:resource} URIs of the annotation, in document order
+ * @param references URIs under the annotation's {@code bqbiol:is} / {@code bqmodel:is}, as written,
+ *                in document order, without repeats
  */
 public record RawSpecies(String id, String formula, String fbcCharge, String sbmlCharge, String sboTerm, int line,
-                         Map<String, String> notes, List<String> inchis) {
+                         Map<String, String> notes, List<String> inchis, List<String> references) {
 
     public RawSpecies {
         notes = Map.copyOf(notes);
         inchis = List.copyOf(inchis);
+        references = List.copyOf(references);
     }
 
     /** Filled while the species element streams past; confined to one reader. */
@@ -31,6 +34,7 @@ public record RawSpecies(String id, String formula, String fbcCharge, String sbm
         private final int line;
         final Map<String, String> notes = new TreeMap<>();
         final List<String> inchis = new ArrayList<>();
+        final List<String> references = new ArrayList<>();
 
         Builder(String id, String formula, String fbcCharge, String sbmlCharge, String sboTerm, int line) {
             this.id = id;
@@ -42,7 +46,7 @@ public record RawSpecies(String id, String formula, String fbcCharge, String sbm
         }
 
         RawSpecies build() {
-            return new RawSpecies(id, formula, fbcCharge, sbmlCharge, sboTerm, line, notes, inchis);
+            return new RawSpecies(id, formula, fbcCharge, sbmlCharge, sboTerm, line, notes, inchis, references);
         }
     }
 }
