@@ -73,9 +73,12 @@ class MappingStageFailureTest {
             assertThat(f.data()).containsEntry("species", "co2_c h2o_c h_c oaa_c pep_c pi_c")
                     .containsKey("error");
         });
+        long mappedNow = data.mappings().values().stream().filter(m -> m.reason().equals("stand-in")).count();
+        assertThat(mappedNow).isGreaterThan(20);
         try (Stream<Path> files = Files.walk(cache)) {
-            long cached = files.filter(p -> p.toString().endsWith(".json")).count();
-            assertThat(cached).as("every mapped reaction but the failed one").isEqualTo(34);
+            long cached = files.filter(p -> p.toString().endsWith(".json")
+                    && p.getParent().getFileName().toString().matches("[0-9a-f]{2}")).count();
+            assertThat(cached).as("every reaction mapped now but the failed one").isEqualTo(mappedNow);
         }
     }
 }
