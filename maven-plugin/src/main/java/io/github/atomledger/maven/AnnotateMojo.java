@@ -10,6 +10,7 @@ import io.github.atomledger.checker.engine.RunConfig;
 import io.github.atomledger.checker.engine.RunResult;
 
 import java.io.File;
+import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -96,16 +97,31 @@ public final class AnnotateMojo extends AbstractMojo {
                 .withMapping(ConfigMapper.mapping("on", baseDirectory, structures, threads, cacheDirectory,
                         mappingTimeBudget, maxHeavyAtoms).withSdIdField(structureIdField)
                         .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)));
+        RunResult result;
         try {
-            RunResult result = new Engine().run(config, new MavenRunListener(getLog()));
-            ModelAnnotator annotator = new ModelAnnotator(overwriteCurated, dryRun, maxModelBytes);
-            for (ModelResult m : result.models()) {
+            result = new Engine().run(config, new MavenRunListener(getLog()));
+        } catch (AtomLedgerException e) {
+            throw new MojoExecutionException(e.getMessage(), e);
+        }
+        // Each model is annotated on its own: one that cannot be written (or one reaction's
+        // annotation that cannot be made) does not keep the others from being annotated; the
+        // goal fails at the end, naming them.
+        ModelAnnotator annotator = new ModelAnnotator(overwriteCurated, dryRun, maxModelBytes);
+        List<String> failures = new ArrayList<>();
+        for (ModelResult m : result.models()) {
+            try {
                 ModelAnnotator.Outcome out = annotator.annotate(config.baseDirectory().resolve(m.file()), m.file(),
                         AnnotationPlan.of(m));
                 getLog().info(summary(m, out));
+                out.failures().forEach(f -> failures.add(m.file() + ": " + f));
+            } catch (AtomLedgerException e) {
+                failures.add(e.getMessage());
             }
-        } catch (AtomLedgerException e) {
-            throw new MojoExecutionException(e.getMessage(), e);
+        }
+        failures.forEach(f -> getLog().error("AtomLedger: " + f));
+        if (!failures.isEmpty()) {
+            throw new MojoExecutionException("AtomLedger annotate: " + failures.get(0)
+                    + (failures.size() > 1 ? " (and " + (failures.size() - 1) + " more, listed above)" : ""));
         }
     }
 

@@ -164,13 +164,14 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.mapping", defaultValue = "auto")
     private String mapping;
 
-    /** Mapping threads; 0 means one per core. Default 0. */
+    /** Threads for mapping, drawing the HTML report's pictures and writing reports; 0 means one per core. Default 0. */
     @Parameter(property = "atomledger.threads", defaultValue = "0")
     private int threads;
 
     /**
-     * Where mapping results are cached between runs (they survive {@code mvn clean}); {@code none}
-     * switches the cache off. Default {@code ~/.cache/atomledger/maps}.
+     * Where mapping results are cached between runs (they survive {@code mvn clean}), with the
+     * HTML report's drawn pictures in its {@code pictures/} folder; {@code none} switches both off.
+     * Default {@code ~/.cache/atomledger/maps}.
      */
     @Parameter(property = "atomledger.cacheDirectory")
     private String cacheDirectory;
@@ -251,21 +252,18 @@ public final class CheckMojo extends AbstractMojo {
                 .withTraces(ConfigMapper.traces(baseDirectory, pathways, fates, tracers));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
-        List<Path> written;
-        List<String> exported;
+        Reporters.Outcome reports;
         try {
             Engine engine = new Engine();
             MavenRunListener listener = new MavenRunListener(getLog());
             result = Gate.standard(engine, config.maxModelBytes()).apply(engine.run(config, listener), gate, listener);
-            written = Reporters.forFormats(config.formats()).write(result, config.reportDirectory());
-            exported = exportMaps ? ConfigMapper.exportMaps(result, config.reportDirectory().resolve("maps")) : List.of();
+            reports = Reporters.forFormats(config.formats()).writeAll(result, config.reportDirectory());
         } catch (AtomLedgerException e) {
             throw new MojoExecutionException(e.getMessage(), e);
-        } catch (IOException e) {
-            throw new MojoExecutionException("AtomLedger could not write its reports: " + e.getMessage(), e);
         } catch (IllegalArgumentException e) {
             throw new MojoExecutionException("AtomLedger configuration: " + e.getMessage(), e);
         }
+        List<Path> written = reports.written();
         boolean colour = ConsoleSummary.colourWanted(System.getenv(), System.console() != null);
         for (String line : ConsoleSummary.lines(result, colour)) {
             getLog().info(line);
@@ -273,12 +271,34 @@ public final class CheckMojo extends AbstractMojo {
         for (Path p : written) {
             getLog().info("report: " + ConfigMapper.display(config.baseDirectory(), p));
         }
+        // Maps are exported after the reports; a file system error there fails the goal like a
+        // report that could not be written.
+        List<String> exported;
+        String exportError = null;
+        try {
+            exported = exportMaps ? ConfigMapper.exportMaps(result, config.reportDirectory().resolve("maps")) : List.of();
+        } catch (IOException e) {
+            exported = List.of();
+            exportError = "AtomLedger could not export the maps: " + e.getMessage();
+        }
         for (String line : exported) {
             if (line.startsWith("!")) {
                 getLog().warn(line.substring(1));
             } else {
                 getLog().info(line);
             }
+        }
+        // A report we could not write is a broken tool, not a finding: fail loudly, after the
+        // summary and every other report are out.
+        for (Reporters.Failure f : reports.failures()) {
+            getLog().error("AtomLedger: " + f.message());
+        }
+        if (!reports.failures().isEmpty()) {
+            Reporters.Failure f = reports.failures().get(0);
+            throw new MojoExecutionException("AtomLedger: " + f.message(), f.error());
+        }
+        if (exportError != null) {
+            throw new MojoExecutionException(exportError);
         }
         if (!result.failing().isEmpty()) {
             throw new MojoFailureException(ConfigMapper.failureSummary(result, written, config.baseDirectory()));

@@ -4,15 +4,19 @@ import io.github.atomledger.atommapper.mapping.MappingResult;
 import io.github.atomledger.atommapper.mapping.Participant;
 import io.github.atomledger.atommapper.mapping.ReactionInput;
 
+import io.github.atomledger.atommapper.depict.internal.LayoutRoutes;
+import io.github.atomledger.atommapper.depict.internal.ReactionScene;
+
 import java.awt.Color;
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Set;
 import java.util.TreeMap;
 import java.util.TreeSet;
-import org.openscience.cdk.depict.Depiction;
-import org.openscience.cdk.depict.DepictionGenerator;
 import org.openscience.cdk.exception.CDKException;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
@@ -23,7 +27,7 @@ import org.openscience.cdk.smiles.SmilesParser;
 import org.openscience.cdk.CDKConstants;
 
 /**
- * Draws a mapped reaction as SVG with CDK's depiction: every carbon of the reactants gets a
+ * Draws a mapped reaction as SVG with CDK's layout and structure generator: every carbon of the reactants gets a
  * colour of its own (by its map number, cycling through {@link #PALETTE}), and each product carbon
  * glows in the colour of the reactant carbon it came from, so the eye can follow each carbon
  * across the arrow. Optionally the map numbers (reactant atom indices: heavy atoms numbered
@@ -34,10 +38,13 @@ import org.openscience.cdk.CDKConstants;
  * }</pre>
  *
  * <p>The picture is drawn from {@link MappingResult#mappedSmiles()}; a result without a map
- * (unmappable, too large) has no picture and {@link #svg()} throws. Output is deterministic for
- * equal inputs: CDK's layout is deterministic and the SVG contains no dates. Sizes are in pixels
- * ({@link Depiction#UNITS_PX}), not CDK's default millimetres. CDK measures text with AWT fonts, so
- * a host without any font may fail. Not thread-safe per instance; build one per picture.
+ * (unmappable, too large) has no picture and {@link #svg()} throws. Where CDK's layout fails, the
+ * picture falls back rather than failing ({@link #draw()}: each molecule laid out alone, then a
+ * frame in place of a molecule CDK cannot lay out or draw), and says so in its notes. Output is
+ * deterministic for equal inputs: CDK's layout is deterministic and the SVG contains no dates.
+ * Sizes are in pixels. Atom symbols are glyph outlines from AWT fonts, so a host without any font
+ * may fail and different hosts may draw slightly different glyphs; titles are SVG text. Not
+ * thread-safe per instance; build one per picture (distinct pictures may be drawn in parallel).
  *
  * <p>Does not handle: hydrogen transitions (hydrogens are implicit), stereo marks beyond what
  * CDK draws from the SMILES, more than seven carbons in distinct colours (colours repeat; switch
@@ -59,6 +66,24 @@ public final class ReactionPicture {
     /** Titles and indices: near-black, readable on white whatever the colour vision. */
     private static final Color TEXT = new Color(0x33, 0x33, 0x33);
 
+    /**
+     * The version of how pictures look. Anything that changes the drawing for the same input
+     * (colours, sizes, layout routes, the SVG writer) must increase it: caches of drawn pictures
+     * key on it, so a stale picture is never shown.
+     */
+    public static final int STYLE_VERSION = 3;
+
+    /**
+     * What a cache of drawn pictures must key on besides the input: {@link #STYLE_VERSION} and
+     * the CDK version (its layout and glyphs are part of the picture).
+     */
+    public static String styleKey() {
+        return "style=" + STYLE_VERSION + ";cdk=" + org.openscience.cdk.CDK.getVersion();
+    }
+
+    private static final String SPECIES = "atomledger.species";
+    private static final String POSITION = "atomledger.position";
+
     private final String reactionId;
     private final String mappedSmiles;
     private final String status;
@@ -66,6 +91,7 @@ public final class ReactionPicture {
     private final List<String> right;
     private Map<String, String> titles = Map.of();
     private boolean atomIndices;
+    private boolean indicesOnRequest;
 
     private ReactionPicture(String reactionId, String mappedSmiles, String status, List<String> left,
                             List<String> right) {
@@ -117,6 +143,15 @@ public final class ReactionPicture {
         return this;
     }
 
+    /**
+     * With {@link #atomIndices(boolean)} on, hides the map numbers unless the SVG is opened at its
+     * fragment {@code #indices} ({@code picture.svg#indices}), so one file serves both views. Default off.
+     */
+    public ReactionPicture indicesOnRequest(boolean on) {
+        this.indicesOnRequest = on;
+        return this;
+    }
+
     /** True when the result has a map to draw. */
     public static boolean drawable(MappingResult result) {
         return !result.mappedSmiles().isEmpty();
@@ -131,21 +166,39 @@ public final class ReactionPicture {
      * The SVG document (UTF-8 text, sizes in px).
      *
      * @throws IllegalArgumentException when the result has no map
-     * @throws IllegalStateException    when CDK cannot read the mapped SMILES or draw it
+     * @throws IllegalStateException    when CDK cannot read the mapped SMILES or draw it at all
      */
     public String svg() {
+        Drawing d = draw();
+        if (!d.drawn()) {
+            throw new IllegalStateException("cannot draw " + reactionId + ": " + String.join(" ", d.notes()));
+        }
+        return d.svg();
+    }
+
+    /**
+     * The picture, or the reason there is none: CDK failing on one molecule or on the whole
+     * layout does not throw; the picture falls back (see {@link Drawing#notes()}) and, when even
+     * that fails, has no SVG. A failure of our own code still throws.
+     *
+     * @throws IllegalArgumentException when the result has no map
+     */
+    public Drawing draw() {
         if (!drawable()) {
             throw new IllegalArgumentException("reaction " + reactionId + " has no atom map to draw (" + status + ")");
         }
         IReaction rxn;
         try {
             rxn = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseReactionSmiles(mappedSmiles);
-        } catch (CDKException e) {
-            throw new IllegalStateException("cannot read the mapped SMILES of " + reactionId + ": "
-                    + e.getMessage(), e);
+        } catch (CDKException | RuntimeException e) {
+            return Drawing.failed("CDK cannot read the mapped SMILES of " + reactionId + " ("
+                    + LayoutRoutes.describe(e) + ").");
         }
-        setTitles(rxn.getReactants(), left);
-        setTitles(rxn.getProducts(), right);
+        setTitles(rxn.getReactants(), left, "reactant");
+        setTitles(rxn.getProducts(), right, "product");
+        LayoutRoutes.Outcome layout = LayoutRoutes.layOut(rxn, ReactionPicture::name);
+        List<String> notes = new ArrayList<>(layout.notes());
+        Set<IAtomContainer> frames = new HashSet<>(layout.failed());
 
         TreeSet<Integer> reactantCarbons = new TreeSet<>();
         for (IAtomContainer mol : rxn.getReactants().atomContainers()) {
@@ -166,21 +219,37 @@ public final class ReactionPicture {
         collect(rxn.getReactants(), colourOf, groups);
         collect(rxn.getProducts(), colourOf, groups);
 
-        DepictionGenerator gen = new DepictionGenerator().withMolTitle().withMappedRxnAlign(true)
-                .withOuterGlowHighlight(6.0).withFillToFit()
-                .withTitleColor(TEXT).withAnnotationColor(TEXT);
+        Map<IChemObject, Color> highlight = new HashMap<>();
         for (int i = 0; i < PALETTE.size(); i++) {
-            if (!groups.get(i).isEmpty()) {
-                gen = gen.withHighlight(groups.get(i), PALETTE.get(i));
+            for (IChemObject o : groups.get(i)) {
+                highlight.put(o, PALETTE.get(i));
             }
         }
+        Set<IAtom> indexed = new HashSet<>();
         if (atomIndices) {
-            gen = gen.withAtomMapNumbers();
+            for (org.openscience.cdk.interfaces.IAtomContainerSet set : List.of(rxn.getReactants(), rxn.getProducts())) {
+                for (IAtomContainer mol : set.atomContainers()) {
+                    for (IAtom a : mol.atoms()) {
+                        if (a.getMapIdx() > 0) {
+                            indexed.add(a);
+                        }
+                    }
+                }
+            }
         }
-        try {
-            return gen.depict(rxn).toSvgStr(Depiction.UNITS_PX);
-        } catch (CDKException e) {
-            throw new IllegalStateException("cannot draw " + reactionId + ": " + e.getMessage(), e);
+        ReactionScene.Options options = new ReactionScene.Options(highlight, 6.0, indexed, indicesOnRequest,
+                TEXT, TEXT);
+        while (true) {
+            try {
+                ReactionScene.Svg svg = ReactionScene.draw(rxn, frames, options);
+                return new Drawing(svg.text(), svg.width(), svg.height(), notes);
+            } catch (ReactionScene.MoleculeFailure e) {
+                if (!frames.add(e.molecule())) {
+                    throw new IllegalStateException("drawing " + reactionId + " failed twice on one molecule", e);
+                }
+                notes.add("CDK could not draw " + name(e.molecule()) + " (" + LayoutRoutes.describe(e.getCause())
+                        + "); it is shown as an empty frame.");
+            }
         }
     }
 
@@ -206,13 +275,54 @@ public final class ReactionPicture {
     }
 
     /** One title per molecule, copies expanded, when the SMILES has one molecule per copy. */
-    private void setTitles(org.openscience.cdk.interfaces.IAtomContainerSet mols, List<String> species) {
-        List<String> names = species.stream().map(id -> titles.getOrDefault(id, id)).toList();
-        if (names.size() != mols.getAtomContainerCount()) {
+    private void setTitles(org.openscience.cdk.interfaces.IAtomContainerSet mols, List<String> species, String side) {
+        for (int i = 0; i < mols.getAtomContainerCount(); i++) {
+            mols.getAtomContainer(i).setProperty(POSITION, side + " " + (i + 1));
+        }
+        if (species.size() != mols.getAtomContainerCount()) {
             return;
         }
-        for (int i = 0; i < names.size(); i++) {
-            mols.getAtomContainer(i).setProperty(CDKConstants.TITLE, names.get(i));
+        for (int i = 0; i < species.size(); i++) {
+            IAtomContainer mol = mols.getAtomContainer(i);
+            mol.setProperty(CDKConstants.TITLE, titles.getOrDefault(species.get(i), species.get(i)));
+            mol.setProperty(SPECIES, species.get(i));
+        }
+    }
+
+    /** How a note names a molecule: species id, title and position, as far as known. */
+    private static String name(IAtomContainer mol) {
+        String species = mol.getProperty(SPECIES);
+        String title = mol.getProperty(CDKConstants.TITLE);
+        String position = mol.getProperty(POSITION);
+        if (species == null) {
+            return position == null ? "a molecule" : position;
+        }
+        return species + (title == null || title.equals(species) ? "" : " (" + title + ")")
+                + (position == null ? "" : ", " + position);
+    }
+
+    /**
+     * A drawn picture.
+     *
+     * @param svg    the SVG document, or "" when nothing could be drawn
+     * @param width  its width in px (0 without a drawing)
+     * @param height its height in px
+     * @param notes  sentences for people on every fallback taken (empty when CDK drew everything)
+     */
+    public record Drawing(String svg, int width, int height, List<String> notes) {
+
+        public Drawing {
+            Objects.requireNonNull(svg, "svg");
+            notes = List.copyOf(notes);
+        }
+
+        static Drawing failed(String note) {
+            return new Drawing("", 0, 0, List.of(note));
+        }
+
+        /** True when there is a picture (perhaps with fallbacks). */
+        public boolean drawn() {
+            return !svg.isEmpty();
         }
     }
 }

@@ -45,7 +45,7 @@ final class HtmlModel {
         Map<String, SpeciesChemistry> chemistry = BalanceTable.chemistry(m.model());
         for (ReactionResult r : m.reactions()) {
             MapPicture map = maps.get(r.id());
-            boolean drawn = map != null && !map.svg().isEmpty() && pictureBudget[0] > 0;
+            boolean drawn = map != null && map.drawing() != null && pictureBudget[0] > 0;
             if (drawn) {
                 pictureBudget[0]--;
             }

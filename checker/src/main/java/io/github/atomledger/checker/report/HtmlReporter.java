@@ -5,6 +5,7 @@ import io.github.atomledger.checker.Version;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.engine.ModelResult;
+import io.github.atomledger.checker.engine.MappingConfig;
 import io.github.atomledger.checker.engine.ReactionResult;
 import io.github.atomledger.checker.engine.RunResult;
 
@@ -21,8 +22,10 @@ import java.util.TreeSet;
 import javax.xml.stream.XMLStreamException;
 
 /**
- * Writes {@code report.html}: one self-contained page (inline CSS and SVG, no scripts, no fonts or
- * images fetched) that opens offline. Per model a summary (reactions by class, findings by
+ * Writes {@code report.html} and its {@code pictures/} folder: one page (inline CSS, no scripts,
+ * nothing fetched from the network) that opens offline, with each atom-map drawing an SVG file
+ * in {@code pictures/} that the page loads lazily (so a genome-scale report opens at once; see
+ * DEVELOPERS.md for the measurement behind this). Per model a summary (reactions by class, findings by
  * severity, mapping status when mapping data is present, model-level findings), then one card per
  * reaction: the equation with species names and ids, the balance table, the findings, the fix
  * hint from the finding data ({@code fix.*}) and, when the {@link MappingSource} has one, the
@@ -35,8 +38,11 @@ public final class HtmlReporter implements Reporter {
 
     static final String NO_MAP = "no-map";
 
-    /** The most drawings one report holds (each is some 30 kB of SVG); later ones are left out. */
-    public static final int MAX_PICTURES = 400;
+    /**
+     * The most drawings one report holds (each an SVG file of some 10 to 150 kB, drawn once and
+     * then cached); later ones are left out.
+     */
+    public static final int MAX_PICTURES = 10_000;
 
     private final MappingSource mappings;
 
@@ -54,15 +60,31 @@ public final class HtmlReporter implements Reporter {
         return ReportFormat.HTML;
     }
 
+    /**
+     * Writes {@code report.html} and the SVG files it shows into {@code pictures/} beside it.
+     *
+     * @throws IllegalStateException naming the reaction, when a drawing fails for a reason other than CDK
+     */
     @Override
     public Path write(RunResult result, Path directory) throws IOException {
         Path file = directory.resolve(ReportFormat.HTML.fileName());
-        ReportFiles.write(file, toHtml(result));
+        try {
+            ReportFiles.write(file, page(result, directory));
+        } catch (java.io.UncheckedIOException e) {
+            throw e.getCause();
+        }
         return file;
     }
 
-    /** The page, exactly the bytes {@link #write} puts in the file. */
+    /**
+     * The page, exactly the bytes {@link #write} puts in the file; the pictures it refers to are
+     * drawn (or taken from the cache) but not written.
+     */
     public String toHtml(RunResult result) {
+        return page(result, null);
+    }
+
+    private String page(RunResult result, Path directory) {
         try {
             Map<ModelResult, Map<String, MapPicture>> maps = new LinkedHashMap<>();
             TreeSet<String> rules = new TreeSet<>();
@@ -77,6 +99,7 @@ public final class HtmlReporter implements Reporter {
                 maps.put(m, mm);
                 m.allFindings().forEach(f -> rules.add(f.ruleId()));
             }
+            drawPictures(result, maps, directory);
             List<String> severities = List.of("error", "warning", "info", "clean");
             List<String> ruleTokens = rules.stream().map(HtmlReporter::token).toList();
 
@@ -110,6 +133,30 @@ public final class HtmlReporter implements Reporter {
             return x.finish();
         } catch (XMLStreamException e) {
             throw new IllegalStateException("cannot write the HTML report", e);
+        }
+    }
+
+    /** Draws the first {@link #MAX_PICTURES} pictures (document order) and puts them into the views. */
+    private static void drawPictures(RunResult result, Map<ModelResult, Map<String, MapPicture>> maps, Path directory) {
+        List<PictureRequest> requests = new ArrayList<>();
+        for (Map<String, MapPicture> mm : maps.values()) {
+            for (MapPicture p : mm.values()) {
+                if (p.drawing() != null && requests.size() < MAX_PICTURES) {
+                    requests.add(p.drawing());
+                }
+            }
+        }
+        if (requests.isEmpty() && directory == null) {
+            return;
+        }
+        MappingConfig mc = result.config().mapping();
+        Map<String, PictureFile> drawn = new PictureFiles(mc.cacheDirectory(), mc.threads()).draw(requests, directory);
+        Map<PictureRequest, PictureFile> byRequest = new java.util.IdentityHashMap<>();
+        for (PictureRequest r : requests) {
+            byRequest.put(r, drawn.get(r.key()));
+        }
+        for (Map<String, MapPicture> mm : maps.values()) {
+            mm.replaceAll((id, p) -> byRequest.containsKey(p.drawing()) ? p.withPicture(byRequest.get(p.drawing())) : p);
         }
     }
 

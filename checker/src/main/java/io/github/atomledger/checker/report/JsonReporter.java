@@ -47,7 +47,7 @@ public final class JsonReporter implements Reporter {
     @Override
     public Path write(RunResult result, Path directory) throws IOException {
         Path file = directory.resolve(ReportFormat.JSON.fileName());
-        ReportFiles.write(file, toJson(result));
+        ReportFiles.write(file, JsonText.utf8(tree(result)));
         return file;
     }
 
