@@ -11,6 +11,7 @@ import io.github.atomledger.checker.engine.RunConfig;
 import io.github.atomledger.checker.engine.RunResult;
 
 import java.io.File;
+import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -112,22 +113,37 @@ public final class AnnotateMojo extends AbstractMojo {
                         cacheDirectory, ParameterValues.durationMillis("mappingTimeBudget", mappingTimeBudget, 2000),
                         ParameterValues.positive("maxHeavyAtoms", maxHeavyAtoms, 400)).withSdIdField(structureIdField)
                         .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)));
+        RunResult result;
         try {
-            RunResult result = new Engine().run(config, new MavenRunListener(getLog()));
-            if (result.models().stream().allMatch(m -> m.mapping().structures().bySpecies().isEmpty())) {
-                throw new MojoExecutionException("AtomLedger annotate: no species has a structure, so nothing can be"
-                        + " annotated. Set atomledger.structures to species structure files (a TSV table with the columns"
-                        + " species and smiles or inchi, SD files or molfiles), for example -Datomledger.structures=structures.tsv, or add"
-                        + " identifiers.org InChI annotations to the species.");
-            }
-            ModelAnnotator annotator = new ModelAnnotator(overwriteCurated, dryRun, maxBytes);
-            for (ModelResult m : result.models()) {
+            result = new Engine().run(config, new MavenRunListener(getLog()));
+        } catch (AtomLedgerException e) {
+            throw ConfigMapper.failure(e.getMessage(), e);
+        }
+        if (result.models().stream().allMatch(m -> m.mapping().structures().bySpecies().isEmpty())) {
+            throw new MojoExecutionException("AtomLedger annotate: no species has a structure, so nothing can be"
+                    + " annotated. Set atomledger.structures to species structure files (a TSV table with the columns"
+                    + " species and smiles or inchi, SD files or molfiles), for example -Datomledger.structures=structures.tsv, or add"
+                    + " identifiers.org InChI annotations to the species.");
+        }
+        // Each model is annotated on its own: one that cannot be written (or one reaction's
+        // annotation that cannot be made) does not keep the others from being annotated; the
+        // goal fails at the end, naming them.
+        ModelAnnotator annotator = new ModelAnnotator(overwriteCurated, dryRun, maxBytes);
+        List<String> failures = new ArrayList<>();
+        for (ModelResult m : result.models()) {
+            try {
                 ModelAnnotator.Outcome out = annotator.annotate(config.baseDirectory().resolve(m.file()), m.file(),
                         AnnotationPlan.of(m));
                 getLog().info(summary(m, out));
+                out.failures().forEach(f -> failures.add(m.file() + ": " + f));
+            } catch (AtomLedgerException e) {
+                failures.add(e.getMessage());
             }
-        } catch (AtomLedgerException e) {
-            throw ConfigMapper.failure(e.getMessage(), e);
+        }
+        failures.forEach(f -> getLog().error("AtomLedger: " + f));
+        if (!failures.isEmpty()) {
+            throw new MojoExecutionException("AtomLedger annotate: " + failures.get(0)
+                    + (failures.size() > 1 ? " (and " + (failures.size() - 1) + " more, listed above)" : ""));
         }
     }
 

@@ -186,13 +186,14 @@ public final class CheckMojo extends AbstractMojo {
     @Parameter(property = "atomledger.mapping", defaultValue = "auto")
     private String mapping;
 
-    /** Mapping threads; {@code 0} means one per core. */
+    /** Threads for mapping, drawing the HTML report's pictures and writing reports; {@code 0} means one per core. */
     @Parameter(property = "atomledger.threads", defaultValue = "0")
     private String threads;
 
     /**
-     * Where mapping results are cached between runs (they survive {@code mvn clean}); {@code none}
-     * switches the cache off. Default {@code ~/.cache/atomledger/maps}.
+     * Where mapping results are cached between runs (they survive {@code mvn clean}), with the
+     * HTML report's drawn pictures in its {@code pictures/} folder; {@code none} switches both off.
+     * Default {@code ~/.cache/atomledger/maps}.
      */
     @Parameter(property = "atomledger.cacheDirectory")
     private String cacheDirectory;
@@ -207,6 +208,28 @@ public final class CheckMojo extends AbstractMojo {
     /** Size cap per molecule for the mapper, in heavy (non-hydrogen) atoms. */
     @Parameter(property = "atomledger.maxHeavyAtoms", defaultValue = "400")
     private String maxHeavyAtoms;
+
+    /**
+     * Budget per reaction for the confidence analysis of a proven optimal map (the runner-up
+     * search and the alternative C–C weights), in milliseconds of the mapping thread's CPU time;
+     * 0 switches the analysis off (then no margins, and no {@code mapping.review} findings).
+     * Milliseconds ({@code 1000}) or a number with a unit ({@code 500ms}, {@code 1s}). Example:
+     * {@code -Datomledger.mappingConfidenceBudget=0}.
+     */
+    @Parameter(property = "atomledger.mappingConfidenceBudget", defaultValue = "1000")
+    private String mappingConfidenceBudget;
+
+    /**
+     * Maps whose margin to the runner-up (the cheapest map that sends some carbon elsewhere) is
+     * at most this many weighted bond edits get a {@code mapping.review} finding, and a curated map
+     * at most this much dearer than the optimum is accepted ({@code mapping.curated-undecided})
+     * instead of failing as {@code mapping.curated-differs}. Default 0: a narrow margin alone does
+     * not flag, as correct maps of central metabolism often win by 1 or 2 (BENCHMARKS.md);
+     * rearrangement patterns and weight-dependent fates always do. Example:
+     * {@code -Datomledger.reviewMargin=2}.
+     */
+    @Parameter(property = "atomledger.reviewMargin", defaultValue = "0")
+    private String reviewMargin;
 
     /**
      * Pathways whose carbons are followed (see {@code docs/traces.md}): a TSV file with a header
@@ -256,28 +279,28 @@ public final class CheckMojo extends AbstractMojo {
         RunConfig config = ConfigMapper.toConfig(baseDirectory, models,
                 ConfigMapper.reportDirectory(reportDirectory, buildDirectory, baseDirectory), failOnSeverity, formats,
                 levels.byRule(), levels.byClass(), ParameterValues.bytes("maxModelBytes", maxModelBytes, 1L << 30))
-                .withMapping(ConfigMapper.mapping(mapping, baseDirectory, structures, ParameterValues.threads(threads),
-                        cacheDirectory, ParameterValues.durationMillis("mappingTimeBudget", mappingTimeBudget, 2000),
+                .withMapping(ConfigMapper.confidence(ConfigMapper.mapping(mapping, baseDirectory, structures,
+                        ParameterValues.threads(threads), cacheDirectory,
+                        ParameterValues.durationMillis("mappingTimeBudget", mappingTimeBudget, 2000),
                         ParameterValues.positive("maxHeavyAtoms", maxHeavyAtoms, 400)).withSdIdField(structureIdField)
-                        .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)))
+                        .withCuratedMaps(ConfigMapper.curatedMaps(baseDirectory, curatedMaps)),
+                        ParameterValues.durationOrZeroMillis("mappingConfidenceBudget", mappingConfidenceBudget, 1000),
+                        ParameterValues.nonNegative("reviewMargin", reviewMargin, 0)))
                 .withTraces(ConfigMapper.traces(baseDirectory, pathways, fates, tracers));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
         RunResult result;
-        List<Path> written;
-        List<String> exported;
+        Reporters.Outcome reports;
         try {
             Engine engine = new Engine();
             MavenRunListener listener = new MavenRunListener(getLog());
             result = Gate.standard(engine, config.maxModelBytes()).apply(engine.run(config, listener), gate, listener);
-            written = Reporters.forFormats(config.formats()).write(result, config.reportDirectory());
-            exported = exportMaps ? ConfigMapper.exportMaps(result, config.reportDirectory().resolve("maps")) : List.of();
+            reports = Reporters.forFormats(config.formats()).writeAll(result, config.reportDirectory());
         } catch (AtomLedgerException e) {
             throw ConfigMapper.failure(e.getMessage(), e);
-        } catch (IOException e) {
-            throw ConfigMapper.failure("AtomLedger could not write its reports: " + e.getMessage(), e);
         } catch (IllegalArgumentException e) {
             throw ConfigMapper.failure("AtomLedger configuration: " + e.getMessage(), e);
         }
+        List<Path> written = reports.written();
         boolean colour = ConsoleSummary.colourWanted(System.getenv(), System.console() != null);
         MavenRunListener log = new MavenRunListener(getLog());
         for (ConsoleSummary.Line line : ConsoleSummary.report(result, colour)) {
@@ -290,12 +313,34 @@ public final class CheckMojo extends AbstractMojo {
         for (Path p : written) {
             getLog().info("report: " + ConfigMapper.display(config.baseDirectory(), p));
         }
+        // Maps are exported after the reports; a file system error there fails the goal like a
+        // report that could not be written.
+        List<String> exported;
+        String exportError = null;
+        try {
+            exported = exportMaps ? ConfigMapper.exportMaps(result, config.reportDirectory().resolve("maps")) : List.of();
+        } catch (IOException e) {
+            exported = List.of();
+            exportError = "AtomLedger could not export the maps: " + e.getMessage();
+        }
         for (String line : exported) {
             if (line.startsWith("!")) {
                 getLog().warn(line.substring(1));
             } else {
                 getLog().info(line);
             }
+        }
+        // A report we could not write is a broken tool, not a finding: fail loudly, after the
+        // summary and every other report are out.
+        for (Reporters.Failure f : reports.failures()) {
+            getLog().error("AtomLedger: " + f.message());
+        }
+        if (!reports.failures().isEmpty()) {
+            Reporters.Failure f = reports.failures().get(0);
+            throw new MojoExecutionException("AtomLedger: " + f.message(), f.error());
+        }
+        if (exportError != null) {
+            throw new MojoExecutionException(exportError);
         }
         if (!result.failing().isEmpty()) {
             throw new MojoFailureException(ConfigMapper.failureSummary(result, written, config.baseDirectory()));

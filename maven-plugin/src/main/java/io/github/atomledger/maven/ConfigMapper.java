@@ -250,6 +250,19 @@ final class ConfigMapper {
     }
 
     /**
+     * The confidence settings on top of {@link #mapping}: the analysis budget per reaction in
+     * milliseconds (0 switches it off) and the review margin in weighted bond edits.
+     */
+    static MappingConfig confidence(MappingConfig mapping, long budgetMs, int reviewMargin) throws MojoExecutionException {
+        if (budgetMs < 0 || reviewMargin < 0) {
+            throw new MojoExecutionException("AtomLedger configuration: mappingConfidenceBudget and reviewMargin must not be "
+                    + "negative, were " + budgetMs + " and " + reviewMargin);
+        }
+        return mapping.withOptions(mapping.options().withConfidenceBudget(Duration.ofMillis(budgetMs)))
+                .withReviewMargin(reviewMargin);
+    }
+
+    /**
      * The report directory: the configured one, else {@code <build directory>/atomledger}. Without
      * a pom Maven leaves {@code ${project.build.directory}} unexpanded; then {@code target} below
      * the base directory is used.

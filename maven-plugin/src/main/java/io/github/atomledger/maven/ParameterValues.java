@@ -44,6 +44,26 @@ final class ParameterValues {
      * a unit, {@code ms}, {@code s} or {@code m}/{@code min} ({@code 2s}, {@code 1.5s}, {@code 500ms}).
      */
     static long durationMillis(String name, String value, long fallback) throws MojoExecutionException {
+        return duration(name, value, fallback, false);
+    }
+
+    /** A duration as {@link #durationMillis}, where {@code 0} is allowed (it switches the budgeted work off). */
+    static long durationOrZeroMillis(String name, String value, long fallback) throws MojoExecutionException {
+        return duration(name, value, fallback, true);
+    }
+
+    /** A whole number, zero or more (for example {@code reviewMargin}). */
+    static int nonNegative(String name, String value, int fallback) throws MojoExecutionException {
+        String v = strip(value, Integer.toString(fallback));
+        if (!v.matches("\\d{1,9}")) {
+            throw bad(name, value, v.startsWith("-") ? "it cannot be negative; use 0 or a positive whole number"
+                    : "use 0 or a positive whole number such as " + Math.max(1, fallback));
+        }
+        return Integer.parseInt(v);
+    }
+
+    private static long duration(String name, String value, long fallback, boolean zeroAllowed)
+            throws MojoExecutionException {
         String v = strip(value, Long.toString(fallback)).toLowerCase(Locale.ROOT);
         Matcher m = DURATION.matcher(v);
         if (!m.matches()) {
@@ -56,8 +76,9 @@ final class ParameterValues {
             case "m", "min" -> n.multiply(BigDecimal.valueOf(60_000));
             default -> n;
         };
-        if (ms.signum() <= 0 || ms.compareTo(BigDecimal.valueOf(Long.MAX_VALUE / 2)) > 0) {
-            throw bad(name, value, "the time must be positive and below a few million years");
+        if (ms.signum() < (zeroAllowed ? 0 : 1) || ms.compareTo(BigDecimal.valueOf(Long.MAX_VALUE / 2)) > 0) {
+            throw bad(name, value, zeroAllowed ? "the time must be 0 (off) or positive, and below a few million years"
+                    : "the time must be positive and below a few million years");
         }
         return ms.setScale(0, java.math.RoundingMode.CEILING).longValueExact();
     }

@@ -4,13 +4,17 @@ import io.github.atomledger.atommapper.mapping.MappingResult;
 import io.github.atomledger.atommapper.mapping.Participant;
 import io.github.atomledger.atommapper.mapping.ReactionInput;
 
+import io.github.atomledger.atommapper.depict.internal.LayoutRoutes;
+import io.github.atomledger.atommapper.depict.internal.ReactionScene;
+
 import java.awt.Color;
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
-import org.openscience.cdk.depict.Depiction;
-import org.openscience.cdk.depict.DepictionGenerator;
+import java.util.Set;
 import org.openscience.cdk.exception.CDKException;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
@@ -23,24 +27,27 @@ import org.openscience.cdk.renderer.elements.MarkedElement;
 import org.openscience.cdk.renderer.generators.standard.StandardGenerator;
 
 /**
- * Draws a mapped reaction as SVG with CDK's depiction. Molecules (or parts of molecules) that the
- * map carries over unchanged, such as cofactors, carriers and currency metabolites, are drawn
- * muted; every carbon that moves between molecules or changes a bond gets a look of its own: a
- * colour (cycling through {@link #PALETTE}) and its map number as a small label (reactant heavy
- * atoms numbered 1..n in input order, copies expanded), and each product carbon glows in the
- * colour and carries the number of the reactant carbon it came from, so the eye can follow it
- * across the arrow. How carbons are chosen: {@link CarbonLooks}. Optionally the map numbers of
- * all other unmuted mapped atoms are printed too.
+ * Draws a mapped reaction as SVG with CDK's layout and structure generator. Molecules (or parts of
+ * molecules) that the map carries over unchanged, such as cofactors, carriers and currency
+ * metabolites, are drawn muted; every carbon that moves between molecules or changes a bond gets a
+ * look of its own: a colour (cycling through {@link #PALETTE}) and its map number as a small label
+ * (reactant heavy atoms numbered 1..n in input order, copies expanded), and each product carbon
+ * glows in the colour and carries the number of the reactant carbon it came from, so the eye can
+ * follow it across the arrow. How carbons are chosen: {@link CarbonLooks}. Optionally the map
+ * numbers of all other unmuted mapped atoms are printed too.
  *
  * <pre>{@code
  * String svg = ReactionPicture.of(input, result).titles(Map.of("pyr_c", "pyruvate")).svg();
  * }</pre>
  *
  * <p>The picture is drawn from {@link MappingResult#mappedSmiles()}; a result without a map
- * (unmappable, too large) has no picture and {@link #svg()} throws. Output is deterministic for
- * equal inputs: CDK's layout is deterministic and the SVG contains no dates. Sizes are in pixels
- * ({@link Depiction#UNITS_PX}), not CDK's default millimetres. CDK measures text with AWT fonts, so
- * a host without any font may fail. Not thread-safe per instance; build one per picture.
+ * (unmappable, too large) has no picture and {@link #svg()} throws. Where CDK's layout fails, the
+ * picture falls back rather than failing ({@link #draw()}: each molecule laid out alone, then a
+ * frame in place of a molecule CDK cannot lay out or draw), and says so in its notes. Output is
+ * deterministic for equal inputs: CDK's layout is deterministic and the SVG contains no dates.
+ * Sizes are in pixels. Atom symbols are glyph outlines from AWT fonts, so a host without any font
+ * may fail and different hosts may draw slightly different glyphs; titles are SVG text. Not
+ * thread-safe per instance; build one per picture (distinct pictures may be drawn in parallel).
  *
  * <p>Does not handle: hydrogen transitions (hydrogens are implicit), stereo marks beyond what
  * CDK draws from the SMILES, more than seven distinct colours (colours repeat past seven; the
@@ -59,13 +66,6 @@ public final class ReactionPicture {
             new Color(0xCC, 0x79, 0xA7), new Color(0x00, 0x72, 0xB2), new Color(0xD5, 0x5E, 0x00),
             new Color(0xF0, 0xE4, 0x42));
 
-    /**
-     * The drawing style; part of every cache key of pictures, so a change of colours, muting or
-     * labels here redraws cached pictures. 2: cofactors muted, only carbons that move or change
-     * coloured, each with its map number (issue 13).
-     */
-    public static final int STYLE_VERSION = 2;
-
     /** Opacity of muted atoms and bonds. */
     private static final String MUTED_OPACITY = "0.3";
 
@@ -75,6 +75,25 @@ public final class ReactionPicture {
     /** Titles and indices: near-black, readable on white whatever the colour vision. */
     private static final Color TEXT = new Color(0x33, 0x33, 0x33);
 
+    /**
+     * The version of how pictures look. Anything that changes the drawing for the same input
+     * (colours, sizes, layout routes, the SVG writer) must increase it: caches of drawn pictures
+     * key on it, so a stale picture is never shown. 4: cofactors muted, only carbons that move
+     * or change a bond coloured, each with its map number.
+     */
+    public static final int STYLE_VERSION = 4;
+
+    /**
+     * What a cache of drawn pictures must key on besides the input: {@link #STYLE_VERSION} and
+     * the CDK version (its layout and glyphs are part of the picture).
+     */
+    public static String styleKey() {
+        return "style=" + STYLE_VERSION + ";cdk=" + org.openscience.cdk.CDK.getVersion();
+    }
+
+    private static final String SPECIES = "atomledger.species";
+    private static final String POSITION = "atomledger.position";
+
     private final String reactionId;
     private final String mappedSmiles;
     private final String status;
@@ -82,6 +101,7 @@ public final class ReactionPicture {
     private final List<String> right;
     private Map<String, String> titles = Map.of();
     private boolean atomIndices;
+    private boolean indicesOnRequest;
 
     private ReactionPicture(String reactionId, String mappedSmiles, String status, List<String> left,
                             List<String> right) {
@@ -133,6 +153,15 @@ public final class ReactionPicture {
         return this;
     }
 
+    /**
+     * With {@link #atomIndices(boolean)} on, hides the map numbers unless the SVG is opened at its
+     * fragment {@code #indices} ({@code picture.svg#indices}), so one file serves both views. Default off.
+     */
+    public ReactionPicture indicesOnRequest(boolean on) {
+        this.indicesOnRequest = on;
+        return this;
+    }
+
     /** True when the result has a map to draw. */
     public static boolean drawable(MappingResult result) {
         return !result.mappedSmiles().isEmpty();
@@ -147,55 +176,76 @@ public final class ReactionPicture {
      * The SVG document (UTF-8 text, sizes in px).
      *
      * @throws IllegalArgumentException when the result has no map
-     * @throws IllegalStateException    when CDK cannot read the mapped SMILES or draw it
+     * @throws IllegalStateException    when CDK cannot read the mapped SMILES or draw it at all
      */
     public String svg() {
+        Drawing d = draw();
+        if (!d.drawn()) {
+            throw new IllegalStateException("cannot draw " + reactionId + ": " + String.join(" ", d.notes()));
+        }
+        return d.svg();
+    }
+
+    /**
+     * The picture, or the reason there is none: CDK failing on one molecule or on the whole
+     * layout does not throw; the picture falls back (see {@link Drawing#notes()}) and, when even
+     * that fails, has no SVG. A failure of our own code still throws.
+     *
+     * @throws IllegalArgumentException when the result has no map
+     */
+    public Drawing draw() {
         if (!drawable()) {
             throw new IllegalArgumentException("reaction " + reactionId + " has no atom map to draw (" + status + ")");
         }
         IReaction rxn;
         try {
             rxn = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseReactionSmiles(mappedSmiles);
-        } catch (CDKException e) {
-            throw new IllegalStateException("cannot read the mapped SMILES of " + reactionId + ": "
-                    + e.getMessage(), e);
+        } catch (CDKException | RuntimeException e) {
+            return Drawing.failed("CDK cannot read the mapped SMILES of " + reactionId + " ("
+                    + LayoutRoutes.describe(e) + ").");
         }
-        setTitles(rxn.getReactants(), left);
-        setTitles(rxn.getProducts(), right);
+        setTitles(rxn.getReactants(), left, "reactant");
+        setTitles(rxn.getProducts(), right, "product");
+        LayoutRoutes.Outcome layout = LayoutRoutes.layOut(rxn, ReactionPicture::name);
+        List<String> notes = new ArrayList<>(layout.notes());
+        Set<IAtomContainer> frames = new HashSet<>(layout.failed());
 
         CarbonLooks looks = CarbonLooks.of(rxn, PALETTE);
-        DepictionGenerator gen = new DepictionGenerator().withMolTitle().withMappedRxnAlign(true)
-                .withOuterGlowHighlight(6.0).withFillToFit()
-                .withTitleColor(TEXT).withAnnotationColor(TEXT);
-        for (Map.Entry<Color, List<IChemObject>> e : looks.highlights().entrySet()) {
-            gen = gen.withHighlight(e.getValue(), e.getKey());
-        }
+        Map<IChemObject, Color> highlight = new HashMap<>();
+        looks.highlights().forEach((colour, objects) -> objects.forEach(o -> highlight.put(o, colour)));
+        Set<IAtom> indexed = new HashSet<>();
         if (atomIndices) {
-            labelEveryMappedAtom(rxn);
-        }
-        try {
-            return mute(gen.depict(rxn).toSvgStr(Depiction.UNITS_PX));
-        } catch (CDKException e) {
-            throw new IllegalStateException("cannot draw " + reactionId + ": " + e.getMessage(), e);
-        }
-    }
-
-    /** Map numbers beside every mapped atom that is not muted (coloured carbons have theirs already). */
-    private static void labelEveryMappedAtom(IReaction rxn) {
-        for (org.openscience.cdk.interfaces.IAtomContainerSet set : List.of(rxn.getReactants(), rxn.getProducts())) {
-            for (IAtomContainer mol : set.atomContainers()) {
-                for (IAtom a : mol.atoms()) {
-                    if (a.getMapIdx() > 0 && !CarbonLooks.MUTED.equals(a.getProperty(MarkedElement.CLASS_KEY))) {
-                        a.setProperty(StandardGenerator.ANNOTATION_LABEL, Integer.toString(a.getMapIdx()));
+            for (org.openscience.cdk.interfaces.IAtomContainerSet set : List.of(rxn.getReactants(), rxn.getProducts())) {
+                for (IAtomContainer mol : set.atomContainers()) {
+                    for (IAtom a : mol.atoms()) {
+                        // coloured carbons carry their number already; muted atoms stay quiet
+                        if (a.getMapIdx() > 0 && a.getProperty(StandardGenerator.ANNOTATION_LABEL) == null
+                                && !CarbonLooks.MUTED.equals(a.getProperty(MarkedElement.CLASS_KEY))) {
+                            indexed.add(a);
+                        }
                     }
                 }
+            }
+        }
+        ReactionScene.Options options = new ReactionScene.Options(highlight, 6.0, indexed, indicesOnRequest,
+                TEXT, TEXT);
+        while (true) {
+            try {
+                ReactionScene.Svg svg = ReactionScene.draw(rxn, frames, options);
+                return new Drawing(mute(svg.text()), svg.width(), svg.height(), notes);
+            } catch (ReactionScene.MoleculeFailure e) {
+                if (!frames.add(e.molecule())) {
+                    throw new IllegalStateException("drawing " + reactionId + " failed twice on one molecule", e);
+                }
+                notes.add("CDK could not draw " + name(e.molecule()) + " (" + LayoutRoutes.describe(e.getCause())
+                        + "); it is shown as an empty frame.");
             }
         }
     }
 
     /**
-     * Gives CDK's muted atoms and bonds ({@code class="muted ..."}) a low opacity, in the SVG itself
-     * so the drawing looks the same wherever it is shown.
+     * Gives muted atoms and bonds ({@code class="muted ..."}) a low opacity, in the SVG itself so
+     * the drawing looks the same wherever it is shown (also as a CSS background image).
      */
     static String mute(String svg) {
         return MUTED_ELEMENT.matcher(svg).replaceAll(m -> java.util.regex.Matcher.quoteReplacement(
@@ -203,13 +253,54 @@ public final class ReactionPicture {
     }
 
     /** One title per molecule, copies expanded, when the SMILES has one molecule per copy. */
-    private void setTitles(org.openscience.cdk.interfaces.IAtomContainerSet mols, List<String> species) {
-        List<String> names = species.stream().map(id -> titles.getOrDefault(id, id)).toList();
-        if (names.size() != mols.getAtomContainerCount()) {
+    private void setTitles(org.openscience.cdk.interfaces.IAtomContainerSet mols, List<String> species, String side) {
+        for (int i = 0; i < mols.getAtomContainerCount(); i++) {
+            mols.getAtomContainer(i).setProperty(POSITION, side + " " + (i + 1));
+        }
+        if (species.size() != mols.getAtomContainerCount()) {
             return;
         }
-        for (int i = 0; i < names.size(); i++) {
-            mols.getAtomContainer(i).setProperty(CDKConstants.TITLE, names.get(i));
+        for (int i = 0; i < species.size(); i++) {
+            IAtomContainer mol = mols.getAtomContainer(i);
+            mol.setProperty(CDKConstants.TITLE, titles.getOrDefault(species.get(i), species.get(i)));
+            mol.setProperty(SPECIES, species.get(i));
+        }
+    }
+
+    /** How a note names a molecule: species id, title and position, as far as known. */
+    private static String name(IAtomContainer mol) {
+        String species = mol.getProperty(SPECIES);
+        String title = mol.getProperty(CDKConstants.TITLE);
+        String position = mol.getProperty(POSITION);
+        if (species == null) {
+            return position == null ? "a molecule" : position;
+        }
+        return species + (title == null || title.equals(species) ? "" : " (" + title + ")")
+                + (position == null ? "" : ", " + position);
+    }
+
+    /**
+     * A drawn picture.
+     *
+     * @param svg    the SVG document, or "" when nothing could be drawn
+     * @param width  its width in px (0 without a drawing)
+     * @param height its height in px
+     * @param notes  sentences for people on every fallback taken (empty when CDK drew everything)
+     */
+    public record Drawing(String svg, int width, int height, List<String> notes) {
+
+        public Drawing {
+            Objects.requireNonNull(svg, "svg");
+            notes = List.copyOf(notes);
+        }
+
+        static Drawing failed(String note) {
+            return new Drawing("", 0, 0, List.of(note));
+        }
+
+        /** True when there is a picture (perhaps with fallbacks). */
+        public boolean drawn() {
+            return !svg.isEmpty();
         }
     }
 }

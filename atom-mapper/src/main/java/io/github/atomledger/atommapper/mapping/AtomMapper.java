@@ -46,7 +46,7 @@ import java.util.concurrent.Future;
 public final class AtomMapper {
 
     /** Version of the mapping algorithm; part of any cache key together with the options' fingerprint. */
-    public static final String VERSION = "1";
+    public static final String VERSION = "2";
 
     private final MappingOptions options;
 
@@ -145,18 +145,26 @@ public final class AtomMapper {
             }
         }
         best = main;
-        if (!others.isEmpty()) {
-            return writer.result(id, MappingStatus.AMBIGUOUS, best, search.upper(), search.upper(), others,
-                    complete ? "" : "more co-optimal maps may exist: their enumeration hit the budget",
-                    elapsed(start));
-        }
         if (!complete) {
-            return writer.result(id, MappingStatus.BEST_FOUND, best, search.upper(), search.upper(), List.of(),
+            return others.isEmpty()
+                    ? writer.result(id, MappingStatus.BEST_FOUND, best, search.upper(), search.upper(), List.of(),
                     "the optimal cost is proven, but the check for other co-optimal carbon maps hit the budget",
-                    elapsed(start));
+                    elapsed(start))
+                    : writer.result(id, MappingStatus.AMBIGUOUS, best, search.upper(), search.upper(), others,
+                    "more co-optimal maps may exist: their enumeration hit the budget", elapsed(start));
         }
-        return writer.result(id, MappingStatus.MAPPED, best, search.upper(), search.upper(), List.of(), "",
-                elapsed(start));
+        MappingStatus status = others.isEmpty() ? MappingStatus.MAPPED : MappingStatus.AMBIGUOUS;
+        if (!pins.isEmpty() || options.confidenceBudget().isZero()) {
+            return writer.result(id, status, best, search.upper(), search.upper(), others, "", elapsed(start));
+        }
+        // Every co-optimal class is known now, so the runner-up search can exclude them all.
+        TreeSet<String> reported = new TreeSet<>();
+        reported.add(search.carbonClass(best));
+        others.forEach(m -> reported.add(search.carbonClass(m)));
+        MapConfidence confidence = new ConfidenceAnalysis(r, p, options, writer)
+                .analyse(search, best, reported, search.upper());
+        return writer.result(id, status, best, search.upper(), search.upper(), others, "", elapsed(start),
+                confidence);
     }
 
     /**

@@ -30,11 +30,20 @@ public final class MappingResult {
     private final SortedMap<String, Long> elementDifference;
     private final String reason;
     private final Duration elapsed;
+    private final MapConfidence confidence;
 
     MappingResult(String reactionId, MappingStatus status, List<AtomTransition> atomMap, List<BondEdit> bondEdits,
                   int cost, int lowerBound, List<List<AtomTransition>> alternatives, List<String> stereoNotes,
                   List<AtomRef> prochiralAtoms, String mappedSmiles, SortedMap<String, Long> elementDifference,
                   String reason, Duration elapsed) {
+        this(reactionId, status, atomMap, bondEdits, cost, lowerBound, alternatives, stereoNotes, prochiralAtoms,
+                mappedSmiles, elementDifference, reason, elapsed, MapConfidence.NONE);
+    }
+
+    MappingResult(String reactionId, MappingStatus status, List<AtomTransition> atomMap, List<BondEdit> bondEdits,
+                  int cost, int lowerBound, List<List<AtomTransition>> alternatives, List<String> stereoNotes,
+                  List<AtomRef> prochiralAtoms, String mappedSmiles, SortedMap<String, Long> elementDifference,
+                  String reason, Duration elapsed, MapConfidence confidence) {
         this.reactionId = Objects.requireNonNull(reactionId);
         this.status = Objects.requireNonNull(status);
         this.atomMap = List.copyOf(atomMap);
@@ -48,6 +57,7 @@ public final class MappingResult {
         this.elementDifference = java.util.Collections.unmodifiableSortedMap(new TreeMap<>(elementDifference));
         this.reason = Objects.requireNonNull(reason);
         this.elapsed = Objects.requireNonNull(elapsed);
+        this.confidence = Objects.requireNonNull(confidence);
     }
 
     /**
@@ -146,6 +156,16 @@ public final class MappingResult {
         return reason;
     }
 
+    /**
+     * How sure the map is: margin to the runner-up, rearrangement patterns, alternative
+     * weightings. {@link MapConfidence#NONE} unless the map is proven optimal (mapped or
+     * ambiguous), no pins were given and the options' confidence budget is positive; the
+     * rearrangement patterns of the map are filled in for every result with a map.
+     */
+    public MapConfidence confidence() {
+        return confidence;
+    }
+
     /** Wall time spent; informative only, not part of {@link #equals}. */
     public Duration elapsed() {
         return elapsed;
@@ -162,7 +182,7 @@ public final class MappingResult {
                 && m.lowerBound == lowerBound && m.alternatives.equals(alternatives)
                 && m.stereoNotes.equals(stereoNotes) && m.prochiralAtoms.equals(prochiralAtoms)
                 && m.mappedSmiles.equals(mappedSmiles) && m.elementDifference.equals(elementDifference)
-                && m.reason.equals(reason);
+                && m.reason.equals(reason) && m.confidence.equals(confidence);
     }
 
     @Override

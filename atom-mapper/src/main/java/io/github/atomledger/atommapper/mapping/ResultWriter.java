@@ -1,6 +1,7 @@
 package io.github.atomledger.atommapper.mapping;
 
 import io.github.atomledger.atommapper.mapping.internal.Prochirality;
+import io.github.atomledger.atommapper.mapping.internal.Rearrangements;
 import io.github.atomledger.atommapper.mapping.internal.SideGraph;
 import java.time.Duration;
 import java.util.ArrayList;
@@ -23,6 +24,13 @@ final class ResultWriter {
 
     MappingResult result(String id, MappingStatus status, int[] map, int cost, int lower, List<int[]> others,
                          String reason, Duration elapsed) {
+        return result(id, status, map, cost, lower, others, reason, elapsed,
+                new MapConfidence(false, -1, false, -1, List.of(), List.of(), Rearrangements.find(r, p, map), List.of(),
+                        List.of(), ""));
+    }
+
+    MappingResult result(String id, MappingStatus status, int[] map, int cost, int lower, List<int[]> others,
+                         String reason, Duration elapsed, MapConfidence confidence) {
         List<List<AtomTransition>> alternatives = new ArrayList<>();
         for (int[] m : others) {
             alternatives.add(MappingResult.carbonsOf(transitions(m)));
@@ -46,7 +54,7 @@ final class ResultWriter {
             notes.add(f.note());
         }
         return new MappingResult(id, status, transitions(map), edits(map, inv), cost, lower, alternatives, notes,
-                List.copyOf(prochiral), mappedSmiles(map), new TreeMap<>(), reason, elapsed);
+                List.copyOf(prochiral), mappedSmiles(map), new TreeMap<>(), reason, elapsed, confidence);
     }
 
     /** Sum over reactant carbons of the change in attached hydrogens. */
@@ -70,6 +78,11 @@ final class ResultWriter {
         }
         pairs.sort(null);
         return pairs.toString();
+    }
+
+    /** The carbon transitions of a complete map, sorted by {@code from}. */
+    List<AtomTransition> carbons(int[] map) {
+        return MappingResult.carbonsOf(transitions(map));
     }
 
     private List<AtomTransition> transitions(int[] map) {

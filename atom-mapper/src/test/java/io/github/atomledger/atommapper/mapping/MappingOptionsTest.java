@@ -17,7 +17,8 @@ class MappingOptionsTest {
         assertThat(o.bondWeight("C", "O")).isEqualTo(1);
         assertThat(o.bondWeight("P", "O")).isEqualTo(1);
         assertThat(o.orderChangeWeight()).isEqualTo(1);
-        assertThat(o.fingerprint()).isEqualTo("t=PT2S;max=400;nodes=max;w=3/1/1;alt=8");
+        assertThat(o.fingerprint()).isEqualTo("t=PT2S;max=400;nodes=max;w=3/1/1;alt=8;conf=PT1S");
+        assertThat(o.alternativeCarbonCarbonWeights()).containsExactly(2, 4);
     }
 
     @Test
@@ -28,6 +29,16 @@ class MappingOptionsTest {
         assertThat(o.withTimeBudget(Duration.ofMillis(500)).fingerprint()).contains("t=PT0.5S");
         assertThat(new MappingOptions(Duration.ofSeconds(2), 400, Long.MAX_VALUE, 4, 1, 1, 8).fingerprint())
                 .contains("w=4/1/1");
+        assertThat(o.withConfidenceBudget(Duration.ZERO).fingerprint()).contains("conf=PT0S");
+    }
+
+    @Test
+    void leavesOutAlternativeWeightsTheOtherWeightsForbid() {
+        // Issue 16: an order change may cost at most twice the cheaper break weight, so C-C 1 is out here.
+        MappingOptions o = new MappingOptions(Duration.ofSeconds(2), 400, Long.MAX_VALUE, 2, 2, 3, 8);
+        assertThat(o.alternativeCarbonCarbonWeights()).containsExactly(3);
+        assertThatThrownBy(() -> o.withConfidenceBudget(Duration.ofSeconds(-1)))
+                .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("confidenceBudget");
     }
 
     @Test

@@ -39,14 +39,23 @@ import java.util.regex.Pattern;
 public final class ModelAnnotator {
 
     /** What happened to one reaction. */
-    public enum Action { ADDED, REPLACED, UNCHANGED, KEPT_CURATED, NOT_FOUND }
+    public enum Action { ADDED, REPLACED, UNCHANGED, KEPT_CURATED, NOT_FOUND, FAILED }
 
     /** One reaction's outcome. */
     public record Change(String reactionId, Action action) {
     }
 
-    /** The outcome for one file: per-reaction changes and whether the file was (or would be) written. */
-    public record Outcome(String file, List<Change> changes, boolean written, boolean wouldChange) {
+    /**
+     * The outcome for one file: per-reaction changes, whether the file was (or would be) written,
+     * and one sentence per reaction whose annotation could not be made ({@link Action#FAILED}; the
+     * others are written all the same).
+     */
+    public record Outcome(String file, List<Change> changes, boolean written, boolean wouldChange,
+                          List<String> failures) {
+        public Outcome {
+            changes = List.copyOf(changes);
+            failures = List.copyOf(failures);
+        }
     }
 
     private final boolean overwriteCurated;
@@ -79,6 +88,7 @@ public final class ModelAnnotator {
         String newline = text.contains("\r\n") ? "\r\n" : "\n";
         List<Patch> patches = new ArrayList<>();
         List<Change> changes = new ArrayList<>();
+        List<String> failures = new ArrayList<>();
         for (Map.Entry<String, TransitionAnnotation> e : new java.util.TreeMap<>(annotations).entrySet()) {
             AnnotationIndex.ReactionSpot spot = index.reactions().get(e.getKey());
             if (spot == null) {
@@ -89,8 +99,14 @@ public final class ModelAnnotator {
                 changes.add(new Change(e.getKey(), Action.KEPT_CURATED));
                 continue;
             }
-            Change c = plan(text, spot, e.getValue(), newline, patches);
-            changes.add(c);
+            try {
+                changes.add(plan(text, spot, e.getValue(), newline, patches));
+            } catch (RuntimeException ex) {
+                // Writing one reaction's annotation text failed (our bug or a library's): the
+                // other reactions are still annotated; the caller reports this one.
+                changes.add(new Change(e.getKey(), Action.FAILED));
+                failures.add("the annotation of reaction " + e.getKey() + " could not be written: " + ex);
+            }
         }
         String updated = apply(text, patches);
         boolean wouldChange = !updated.equals(text);
@@ -100,7 +116,7 @@ public final class ModelAnnotator {
             write(original, original.encode(updated), display);
             written = true;
         }
-        return new Outcome(display, changes, written, wouldChange);
+        return new Outcome(display, changes, written, wouldChange, failures);
     }
 
     private record Patch(int start, int end, String replacement) {

@@ -19,6 +19,7 @@ public final class CheckContext {
     private final Map<String, SpeciesChemistry> chemistry;
     private final Map<String, ReactionBalance> balances;
     private final MappingData mapping;
+    private final boolean mapsPending;
     private final java.util.concurrent.ConcurrentHashMap<Class<?>, Object> shared = new java.util.concurrent.ConcurrentHashMap<>();
 
     public CheckContext(ModelView model, Map<String, SpeciesChemistry> chemistry,
@@ -28,14 +29,38 @@ public final class CheckContext {
 
     public CheckContext(ModelView model, Map<String, SpeciesChemistry> chemistry,
                         Map<String, ReactionBalance> balances, MappingData mapping) {
+        this(model, chemistry, balances, mapping, false);
+    }
+
+    private CheckContext(ModelView model, Map<String, SpeciesChemistry> chemistry,
+                         Map<String, ReactionBalance> balances, MappingData mapping, boolean mapsPending) {
         this.model = Objects.requireNonNull(model, "model");
         this.chemistry = Map.copyOf(chemistry);
         this.balances = Map.copyOf(balances);
         this.mapping = Objects.requireNonNull(mapping, "mapping");
+        this.mapsPending = mapsPending;
     }
 
-    /** Atom maps and structures; {@link MappingData#NONE} when mapping is off. */
+    /**
+     * A context for the checks that run while the atom maps are still being computed (the engine
+     * runs every check outside the {@code mapping} and {@code structure} areas then): reading
+     * {@link #mapping()} from it is a bug and throws.
+     */
+    public static CheckContext whileMapping(ModelView model, Map<String, SpeciesChemistry> chemistry,
+                                            Map<String, ReactionBalance> balances) {
+        return new CheckContext(model, chemistry, balances, MappingData.NONE, true);
+    }
+
+    /**
+     * Atom maps and structures; {@link MappingData#NONE} when mapping is off.
+     *
+     * @throws IllegalStateException in a context made by {@link #whileMapping}
+     */
     public MappingData mapping() {
+        if (mapsPending) {
+            throw new IllegalStateException("atom maps were read by a check outside the mapping and structure areas, "
+                    + "which runs while they are computed");
+        }
         return mapping;
     }
 

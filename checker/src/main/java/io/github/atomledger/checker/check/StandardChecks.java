@@ -19,6 +19,7 @@ import io.github.atomledger.checker.check.integrity.ReactionShapeCheck;
 import io.github.atomledger.checker.check.integrity.ReferenceCheck;
 
 import io.github.atomledger.checker.check.mapping.CuratedMapCheck;
+import io.github.atomledger.checker.check.mapping.MappingReviewCheck;
 import io.github.atomledger.checker.check.mapping.MappingStatusCheck;
 import io.github.atomledger.checker.check.mapping.StaleMapCheck;
 import io.github.atomledger.checker.check.mapping.StructureMissingCheck;
@@ -65,6 +66,7 @@ public final class StandardChecks {
         all.addAll(MappingStatusCheck.all());
         all.addAll(CuratedMapCheck.all());
         all.add(new CuratedFileCheck());
+        all.addAll(MappingReviewCheck.all());
         all.add(new StaleMapCheck());
         return List.copyOf(all);
     }

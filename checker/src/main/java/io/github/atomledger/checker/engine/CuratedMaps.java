@@ -3,6 +3,7 @@ package io.github.atomledger.checker.engine;
 import io.github.atomledger.atommapper.mapping.AtomMapper;
 import io.github.atomledger.atommapper.mapping.AtomRef;
 import io.github.atomledger.atommapper.mapping.AtomTransition;
+import io.github.atomledger.atommapper.mapping.MapConfidence;
 import io.github.atomledger.atommapper.mapping.MappingResult;
 import io.github.atomledger.atommapper.mapping.MappingStatus;
 import io.github.atomledger.atommapper.mapping.Participant;
@@ -32,6 +33,18 @@ final class CuratedMaps {
     }
 
     static CuratedVerdict judge(AtomMapper mapper, ReactionInput input, ReactionMapping optimum, List<AtomTransition> curated) {
+        return judge(mapper, input, optimum, curated, MapConfidence.DEFAULT_REVIEW_MARGIN);
+    }
+
+    /**
+     * As {@link #judge(AtomMapper, ReactionInput, ReactionMapping, List)}, and a valid map that
+     * differs is "criterion undecided" (accepted) when it costs at most {@code reviewMargin} more
+     * than the optimum, or, for a map that calls for review (a rearrangement pattern or a fate
+     * that depends on the weights), at most one moved C–C bond more: the price of the 1,2-shift
+     * the criterion is known to miss.
+     */
+    static CuratedVerdict judge(AtomMapper mapper, ReactionInput input, ReactionMapping optimum,
+                                List<AtomTransition> curated, int reviewMargin) {
         List<String> problems = validate(input, curated);
         if (!problems.isEmpty()) {
             return new CuratedVerdict(input.reactionId(), problems, false, -1, List.of());
@@ -53,7 +66,12 @@ final class CuratedMaps {
         Set<String> optimal = new HashSet<>();
         optimum.carbons().forEach(t -> optimal.add(t.from() + ">" + t.to()));
         List<AtomTransition> differing = curated.stream().filter(t -> !optimal.contains(t.from() + ">" + t.to())).toList();
-        return new CuratedVerdict(input.reactionId(), List.of(), false, extra, differing);
+        // A narrow margin alone does not stretch the acceptance: only a pattern or a weight-dependent fate does.
+        boolean flagged = optimum.confidence().reviewReasons(reviewMargin).stream()
+                .anyMatch(reason -> reason != MapConfidence.Reason.MARGIN);
+        boolean undecided = extra >= 0 && (extra <= reviewMargin
+                || flagged && extra <= 2 * mapper.options().carbonCarbonWeight());
+        return new CuratedVerdict(input.reactionId(), List.of(), false, extra, differing, undecided);
     }
 
     static List<String> validate(ReactionInput input, List<AtomTransition> map) {

@@ -109,10 +109,16 @@ public final class Engine {
         BalanceCalculator calculator = new BalanceCalculator();
         Map<String, SpeciesChemistry> chemistry = calculator.chemistry(model);
         Map<String, ReactionBalance> balances = calculator.balances(model, chemistry);
-        MappingData mapping = mappingConfig.enabled() && file != null
+        boolean mapped = mappingConfig.enabled() && file != null;
+        // Checks that do not read atom maps run on a second thread while the maps are computed
+        // or read from the cache (a warm yeast-GEM run spends as long on each); see DEVELOPERS.md.
+        EarlyChecks early = mapped ? EarlyChecks.start(checks, policy,
+                CheckContext.whileMapping(model, chemistry, balances)) : EarlyChecks.NONE;
+        MappingData mapping = mapped
                 ? new MappingStage(mappingConfig, base, maxBytes, listener).run(model, file, balances)
                 : MappingData.NONE;
         CheckContext context = new CheckContext(model, chemistry, balances, mapping);
+        Map<ModelCheck, EarlyChecks.Outcome> earlyOutcomes = early.outcomes();
 
         Map<String, List<Finding>> byReaction = new HashMap<>();
         List<Finding> modelFindings = new ArrayList<>();
@@ -122,7 +128,8 @@ public final class Engine {
             }
             List<Finding> found;
             try {
-                found = check.check(context);
+                EarlyChecks.Outcome done = earlyOutcomes.get(check);
+                found = done != null ? done.get() : check.check(context);
             } catch (RuntimeException e) {
                 throw new AtomLedgerException(model.file() + ": check " + check.ruleId() + " failed: " + AtomLedgerException.reason(e), e);
             }

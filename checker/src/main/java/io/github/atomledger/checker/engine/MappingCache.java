@@ -97,10 +97,11 @@ final class MappingCache {
         m.missingStructures().forEach(missing::add);
         ObjectNode fp = o.putObject("fingerprints");
         m.fingerprints().forEach(fp::put);
+        o.set("confidence", ConfidenceJson.write(m.confidence()));
         return o;
     }
 
-    private static ArrayNode transitions(List<AtomTransition> list) {
+    static ArrayNode transitions(List<AtomTransition> list) {
         ArrayNode a = JSON.createArrayNode();
         for (AtomTransition t : list) {
             ArrayNode row = a.addArray();
@@ -123,10 +124,10 @@ final class MappingCache {
         o.get("fingerprints").fields().forEachRemaining(e -> fp.put(e.getKey(), e.getValue().asText()));
         return new ReactionMapping(reactionId, MapStatus.fromLabel(o.get("status").asText()), transitions(o.get("carbons")),
                 alts, o.get("cost").asInt(), o.get("lowerBound").asInt(), o.get("mappedSmiles").asText(), notes,
-                o.get("reason").asText(), diff, missing, fp);
+                o.get("reason").asText(), diff, missing, fp, ConfidenceJson.read(o.get("confidence")));
     }
 
-    private static List<AtomTransition> transitions(JsonNode a) {
+    static List<AtomTransition> transitions(JsonNode a) {
         List<AtomTransition> out = new ArrayList<>();
         for (JsonNode r : a) {
             out.add(new AtomTransition(new AtomRef(r.get(0).asText(), r.get(1).asInt(), r.get(2).asInt()),

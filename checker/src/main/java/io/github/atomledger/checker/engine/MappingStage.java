@@ -6,11 +6,13 @@ import io.github.atomledger.atommapper.mapping.MappingStatus;
 import io.github.atomledger.atommapper.mapping.ReactionInput;
 import io.github.atomledger.checker.AtomLedgerException;
 import io.github.atomledger.checker.transitions.AnnotationIndex;
+import io.github.atomledger.checker.transitions.ModelText;
 import io.github.atomledger.checker.transitions.StoredStructure;
 import io.github.atomledger.checker.transitions.TransitionAnnotation;
 import io.github.atomledger.checker.check.balance.ReactionBalance;
 import io.github.atomledger.checker.check.mapping.CuratedVerdict;
 import io.github.atomledger.checker.check.mapping.MapStatus;
+import io.github.atomledger.checker.check.mapping.MapperFailure;
 import io.github.atomledger.checker.check.mapping.MappingData;
 import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.check.structure.SpeciesStructures;
@@ -34,6 +36,7 @@ import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Function;
 
 /**
  * Maps the reactions of one model: resolves structures, builds mapper inputs, takes results from
@@ -49,22 +52,34 @@ final class MappingStage {
     private final long maxBytes;
     private final RunListener listener;
     private final AtomMapper mapper;
+    private final Function<ReactionInput, MappingResult> mapping;
     private final MappingCache cache;
 
     MappingStage(MappingConfig config, Path baseDirectory, long maxBytes, RunListener listener) {
+        this(config, baseDirectory, maxBytes, listener, null);
+    }
+
+    /** As above, with {@code mapping} in place of the atom mapper when not null (tests). */
+    MappingStage(MappingConfig config, Path baseDirectory, long maxBytes, RunListener listener,
+                 Function<ReactionInput, MappingResult> mapping) {
         this.config = config;
         this.baseDirectory = baseDirectory;
         this.maxBytes = maxBytes;
         this.listener = listener;
         this.mapper = new AtomMapper(config.options());
+        this.mapping = mapping == null ? mapper::map : mapping;
         this.cache = config.cacheDirectory() == null ? null : new MappingCache(config.cacheDirectory());
     }
 
     MappingData run(ModelView model, Path file, Map<String, ReactionBalance> balances) {
-        AnnotationIndex index = AnnotationIndex.read(file, model.file(), maxBytes);
+        // Only a model that carries our annotation element needs the second, positional scan
+        // (a tenth of a warm yeast-GEM run); the namespace URI is in every such element.
+        String text = ModelText.read(file, model.file(), maxBytes).text();
+        AnnotationIndex index = text.contains(TransitionAnnotation.NAMESPACE)
+                ? AnnotationIndex.scan(text, model.file()) : null;
         Map<String, TransitionAnnotation> stored = new LinkedHashMap<>();
         Map<String, String> storedSmiles = new TreeMap<>();
-        index.reactions().forEach((id, spot) -> {
+        (index == null ? Map.<String, AnnotationIndex.ReactionSpot>of() : index.reactions()).forEach((id, spot) -> {
             if (spot.stored() != null) {
                 stored.put(id, spot.stored());
                 for (StoredStructure s : spot.stored().structures()) {
@@ -106,7 +121,12 @@ final class MappingStage {
             ReactionInput input = inputs.get(id);
             ReactionMapping optimum = results.get(id);
             if (annotation.isCurated() && input != null && optimum != null) {
-                curated.put(id, CuratedMaps.judge(mapper, input, optimum, annotation.carbons()));
+                try {
+                    curated.put(id, CuratedMaps.judge(mapper, input, optimum, annotation.carbons(),
+                            config.reviewMargin()));
+                } catch (RuntimeException | StackOverflowError e) {
+                    results.put(id, failed(id, "while checking the curated map", e));
+                }
             }
         });
         // Curated RXN files: judged like curated maps in the model, and in their place.
@@ -114,11 +134,12 @@ final class MappingStage {
                 : CuratedFiles.read(config.curatedMaps(), baseDirectory, model, inputs, results);
         imported.forEach((id, m) -> {
             if (m.read()) {
-                curated.put(id, m.problems().isEmpty() ? CuratedMaps.judge(mapper, inputs.get(id), results.get(id), m.carbons())
+                curated.put(id, m.problems().isEmpty() ? CuratedMaps.judge(mapper, inputs.get(id), results.get(id), m.carbons(),
+                        config.reviewMargin())
                         : new CuratedVerdict(id, m.problems(), false, -1, List.of()));
             }
         });
-        return new MappingData(true, results, curated, stored, structures, imported);
+        return new MappingData(true, results, curated, stored, structures, imported, config.reviewMargin());
     }
 
     private record Job(String reactionId, ReactionInput input, String key) {
@@ -146,7 +167,7 @@ final class MappingStage {
             List<Future<ReactionMapping>> futures = new ArrayList<>();
             for (Job j : jobs) {
                 futures.add(pool.submit(() -> {
-                    ReactionMapping m = toMapping(mapper.map(j.input()), fingerprints(j.input()));
+                    ReactionMapping m = mapOne(j);
                     counts.get(m.status()).incrementAndGet();
                     done.incrementAndGet();
                     return m;
@@ -168,7 +189,7 @@ final class MappingStage {
                 }
                 Job j = jobs.get(i);
                 results.put(j.reactionId(), m);
-                if (cache != null) {
+                if (cache != null && !MapperFailure.is(m)) {
                     cache.put(j.key(), m);
                 }
             }
@@ -180,6 +201,24 @@ final class MappingStage {
         } finally {
             pool.shutdownNow();
         }
+    }
+
+    /**
+     * Maps one reaction. The mapper and CDK below it throwing on one reaction (a structure CDK's
+     * SMILES writer or ring perception cannot take, a bug of ours) does not end the run: the
+     * reaction is reported as not mapped, with the error, and {@code mapping.mapper-failed}
+     * names it (an error by default, so the build still fails).
+     */
+    private ReactionMapping mapOne(Job j) {
+        try {
+            return toMapping(mapping.apply(j.input()), fingerprints(j.input()));
+        } catch (RuntimeException | StackOverflowError e) {
+            return failed(j.reactionId(), "", e);
+        }
+    }
+
+    private static ReactionMapping failed(String reactionId, String when, Throwable e) {
+        return ReactionMapping.without(reactionId, MapStatus.SKIPPED, MapperFailure.reason(when, e), List.of());
     }
 
     private static String progress(String file, int done, int total, Map<MapStatus, AtomicInteger> counts, long start) {
@@ -220,6 +259,6 @@ final class MappingStage {
         String reason = r.status() == MappingStatus.TOO_LARGE ? "too large for the mapper: " + r.reason() : r.reason();
         return new ReactionMapping(r.reactionId(), status, r.carbonTransitions(), r.alternatives(), r.cost(),
                 r.lowerBound(), r.mappedSmiles(), r.stereoNotes(), reason, r.elementDifference(), List.of(),
-                new TreeMap<>(fingerprints));
+                new TreeMap<>(fingerprints), r.confidence());
     }
 }

@@ -64,9 +64,9 @@ final class HtmlModel {
         modelFindings();
         new HtmlTraces(x, m, idPrefix, traceBudget).write();
         Map<String, SpeciesChemistry> chemistry = BalanceTable.chemistry(m.model());
-        for (ReactionResult r : ordered()) {
+        for (ReactionResult r : ordered(m, run)) {
             MapPicture map = maps.get(r.id());
-            boolean drawn = map != null && !map.svg().isEmpty() && pictureBudget[0] > 0;
+            boolean drawn = map != null && map.drawing() != null && pictureBudget[0] > 0;
             if (drawn) {
                 pictureBudget[0]--;
             }
@@ -79,14 +79,14 @@ final class HtmlModel {
      * Failing cards first, then error, warning, imbalanced-at-info (biomass), other info and clean
      * ones; file order within each.
      */
-    private List<ReactionResult> ordered() {
+    static List<ReactionResult> ordered(ModelResult m, RunResult run) {
         List<ReactionResult> out = new ArrayList<>(m.reactions());
-        out.sort(Comparator.comparingInt(this::rank));
+        out.sort(Comparator.comparingInt(r -> rank(r, run)));
         return out;
     }
 
-    private int rank(ReactionResult r) {
-        if (r.findings().stream().anyMatch(this::fails)) {
+    private static int rank(ReactionResult r, RunResult run) {
+        if (r.findings().stream().anyMatch(f -> fails(f, run))) {
             return 0;
         }
         Severity worst = Families.worst(r.findings());
@@ -102,7 +102,7 @@ final class HtmlModel {
         return worst == Severity.ERROR ? 1 : 2;
     }
 
-    private boolean fails(Finding f) {
+    private static boolean fails(Finding f, RunResult run) {
         return run.config().failOn() != null && f.severity().atLeast(run.config().failOn()) && run.gate().mayFail(f);
     }
 
@@ -185,7 +185,7 @@ final class HtmlModel {
         List<Integer> important = new ArrayList<>();
         List<Integer> info = new ArrayList<>();
         for (int i = 0; i < all.size(); i++) {
-            (all.get(i).severity() == Severity.INFO && !fails(all.get(i)) ? info : important).add(i);
+            (all.get(i).severity() == Severity.INFO && !fails(all.get(i), run) ? info : important).add(i);
         }
         if (!important.isEmpty()) {
             findingTable(important, Wording.count(important.size(), "finding") + " on species, the model and the"

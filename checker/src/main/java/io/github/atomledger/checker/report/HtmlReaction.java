@@ -203,27 +203,45 @@ final class HtmlReaction {
             return;
         }
         x.start("figure", "pic").nl();
-        if (!map.svg().isEmpty()) {
-            if (pictureAllowed) {
-                x.start("div", "pic-box");
-                SvgEmbed.copy(map.svg(), idPrefix + "-" + HtmlReporter.token(r.id()) + "-", x.writer());
-                x.end().nl();
-            } else {
-                x.leaf("p", "nomap", "Drawing left out: the report holds at most " + HtmlReporter.MAX_PICTURES
-                        + " pictures.").nl();
-            }
+        // A note already said by one of the card's findings (the stereo pin) is not repeated.
+        List<String> notes = map.notes().stream()
+                .filter(n -> r.findings().stream().noneMatch(f -> f.message().contains(n)))
+                .collect(java.util.stream.Collectors.toCollection(java.util.ArrayList::new));
+        if (map.drawing() != null && !pictureAllowed) {
+            x.leaf("p", "nomap", "Drawing left out: the report holds at most " + HtmlReporter.MAX_PICTURES
+                    + " pictures.").nl();
+        } else if (map.drawn()) {
+            PictureFile p = map.picture();
+            String src = PictureFiles.FOLDER + "/" + p.file();
+            // A CSS background, not an <img>: Chromium loads every <img> of the page at once
+            // (headless, it ignores loading="lazy"), while a background inside an article that
+            // content-visibility skips is not even requested. See DEVELOPERS.md.
+            x.start("div", "pic-box");
+            x.start("div", "pic").attr("role", "img").attr("aria-label", "Atom map of " + r.id())
+                    .attr("style", "--pic:url(" + src + ");--pic-idx:url(" + src + "#indices);aspect-ratio:"
+                            + p.width() + "/" + p.height() + ";max-width:" + p.width() + "px").end();
+            x.end().nl();
+            p.notes().forEach(n -> notes.add("Drawing: " + n));
+        } else if (map.picture() != null) {
+            map.picture().notes().forEach(n -> notes.add("No drawing: " + n));
         }
         StringBuilder caption = new StringBuilder(map.summary());
-        if (!map.svg().isEmpty()) {
+        boolean shown = map.drawn() && pictureAllowed;
+        if (shown) {
             caption.append(caption.length() == 0 ? "" : " ")
                     .append("Carbons that move between molecules or change a bond are coloured and numbered; each"
                             + " keeps its colour and number across the arrow. Parts the reaction leaves unchanged"
-                            + " (cofactors, carriers) are drawn faint.");
+                            + " (cofactors, carriers) are drawn faint. ");
         }
-        x.leaf("figcaption", null, caption.toString()).nl();
-        // A note already said by one of the card's findings (the stereo pin) is not repeated.
-        List<String> notes = map.notes().stream()
-                .filter(n -> r.findings().stream().noneMatch(f -> f.message().contains(n))).toList();
+        x.start("figcaption").text(caption.toString());
+        if (shown) {
+            x.start("a").attr("href", PictureFiles.FOLDER + "/" + map.picture().file()).text("Open the drawing").end();
+            x.text(" (");
+            x.start("a").attr("href", PictureFiles.FOLDER + "/" + map.picture().file() + "#indices")
+                    .text("with atom indices").end();
+            x.text(").");
+        }
+        x.end().nl();
         if (!notes.isEmpty()) {
             x.start("ul", "findings");
             for (String n : notes) {
@@ -231,6 +249,8 @@ final class HtmlReaction {
             }
             x.end().nl();
         }
+        HtmlConfidence.write(x, r.mapping(), r.findings(), m.mapping().structures());
         x.end().nl();
     }
+
 }

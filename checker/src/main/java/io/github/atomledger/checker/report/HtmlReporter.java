@@ -6,6 +6,7 @@ import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.Severity;
 import io.github.atomledger.checker.engine.ModelResult;
+import io.github.atomledger.checker.engine.MappingConfig;
 import io.github.atomledger.checker.engine.ReactionResult;
 import io.github.atomledger.checker.engine.RunResult;
 
@@ -22,11 +23,13 @@ import java.util.TreeSet;
 import javax.xml.stream.XMLStreamException;
 
 /**
- * Writes {@code report.html}: one self-contained page (inline CSS and SVG, no scripts, no fonts or
- * images fetched) that opens offline. Problems first: the header with the verdict, then the
- * overview ({@link HtmlOverview}: likely causes, what fails the build, warnings, each linking to
- * its card; info collapsed), then any further run-level {@link #SECTIONS}, the filters, and per
- * model a summary (reactions by class, findings by severity, the balance counts of
+ * Writes {@code report.html} and its {@code pictures/} folder: one page (inline CSS, no scripts,
+ * nothing fetched from the network) that opens offline, with each atom-map drawing an SVG file in
+ * {@code pictures/} that the page loads lazily (so a genome-scale report opens at once; see
+ * DEVELOPERS.md for the measurement behind this). Problems first: the header with the verdict,
+ * then the overview ({@link HtmlOverview}: likely causes, what fails the build, warnings, each
+ * linking to its card; info collapsed), then any further run-level {@link #SECTIONS}, the filters,
+ * and per model a summary (reactions by class, findings by severity, the balance counts of
  * {@link ModelCounts}, mapping status when mapping data is present, findings on species and the
  * model) and one card per reaction, failing ones first: the equation with species names and ids,
  * the balance table, the findings, the fix hint from the finding data ({@code fix.*}) and, when
@@ -46,8 +49,11 @@ public final class HtmlReporter implements Reporter {
      */
     static final List<HtmlSection> SECTIONS = List.of(new HtmlOverview());
 
-    /** The most drawings one report holds (each is some 30 kB of SVG); later ones are left out. */
-    public static final int MAX_PICTURES = 400;
+    /**
+     * The most drawings one report holds (each an SVG file of some 10 to 150 kB, drawn once and
+     * then cached); later ones (in the order of the cards, failing ones first) are left out.
+     */
+    public static final int MAX_PICTURES = 10_000;
 
     private final MappingSource mappings;
 
@@ -65,15 +71,31 @@ public final class HtmlReporter implements Reporter {
         return ReportFormat.HTML;
     }
 
+    /**
+     * Writes {@code report.html} and the SVG files it shows into {@code pictures/} beside it.
+     *
+     * @throws IllegalStateException naming the reaction, when a drawing fails for a reason other than CDK
+     */
     @Override
     public Path write(RunResult result, Path directory) throws IOException {
         Path file = directory.resolve(ReportFormat.HTML.fileName());
-        ReportFiles.write(file, toHtml(result));
+        try {
+            ReportFiles.write(file, page(result, directory));
+        } catch (java.io.UncheckedIOException e) {
+            throw e.getCause();
+        }
         return file;
     }
 
-    /** The page, exactly the bytes {@link #write} puts in the file. */
+    /**
+     * The page, exactly the bytes {@link #write} puts in the file; the pictures it refers to are
+     * drawn (or taken from the cache) but not written.
+     */
     public String toHtml(RunResult result) {
+        return page(result, null);
+    }
+
+    private String page(RunResult result, Path directory) {
         try {
             Map<ModelResult, Map<String, MapPicture>> maps = new LinkedHashMap<>();
             Map<ModelResult, String> prefixes = new LinkedHashMap<>();
@@ -96,6 +118,7 @@ public final class HtmlReporter implements Reporter {
                 m.allFindings().forEach(f -> rules.add(f.ruleId()));
                 m.modelFindings().forEach(f -> severities.add(f.severity().label()));
             }
+            drawPictures(result, maps, directory);
             List<String> severityTokens = SEVERITY_ORDER.stream().filter(severities::contains).toList();
             List<String> ruleTokens = rules.stream().map(HtmlReporter::token).toList();
             List<String> statusTokens = mapped ? new ArrayList<>(statuses) : List.of();
@@ -121,6 +144,7 @@ public final class HtmlReporter implements Reporter {
             filterInputs(x, "rule", ruleTokens);
             if (!statusTokens.isEmpty()) {
                 filterInputs(x, "st", statusTokens);
+                x.empty("input").attr("type", "checkbox").attr("id", "show-idx").attr("class", "radio").nl();
             }
             nav(x, severityTokens, new ArrayList<>(rules), statusTokens);
             x.start("main").nl();
@@ -151,6 +175,34 @@ public final class HtmlReporter implements Reporter {
             }
         }
         return prefix + "-" + token(f.elementId());
+    }
+
+    /**
+     * Draws the first {@link #MAX_PICTURES} pictures, in the order of the cards (so the pictures the
+     * budget keeps are the ones the page shows), and puts them into the views.
+     */
+    private static void drawPictures(RunResult result, Map<ModelResult, Map<String, MapPicture>> maps, Path directory) {
+        List<PictureRequest> requests = new ArrayList<>();
+        for (Map.Entry<ModelResult, Map<String, MapPicture>> e : maps.entrySet()) {
+            for (ReactionResult r : HtmlModel.ordered(e.getKey(), result)) {
+                MapPicture p = e.getValue().get(r.id());
+                if (p != null && p.drawing() != null && requests.size() < MAX_PICTURES) {
+                    requests.add(p.drawing());
+                }
+            }
+        }
+        if (requests.isEmpty() && directory == null) {
+            return;
+        }
+        MappingConfig mc = result.config().mapping();
+        Map<String, PictureFile> drawn = new PictureFiles(mc.cacheDirectory(), mc.threads()).draw(requests, directory);
+        Map<PictureRequest, PictureFile> byRequest = new java.util.IdentityHashMap<>();
+        for (PictureRequest r : requests) {
+            byRequest.put(r, drawn.get(r.key()));
+        }
+        for (Map<String, MapPicture> mm : maps.values()) {
+            mm.replaceAll((id, p) -> byRequest.containsKey(p.drawing()) ? p.withPicture(byRequest.get(p.drawing())) : p);
+        }
     }
 
     private static void header(XmlOut x, RunResult result) throws XMLStreamException {
@@ -195,6 +247,10 @@ public final class HtmlReporter implements Reporter {
         navGroup(x, "rule", "rule", rules.stream().map(HtmlReporter::token).toList(), rules);
         if (!statuses.isEmpty()) {
             navGroup(x, "map status", "st", statuses, statuses);
+            // every mapped atom's number in the drawings (coloured carbons always carry theirs)
+            x.start("div", "group");
+            x.start("label").attr("for", "show-idx").text("all atom numbers").end();
+            x.end().nl();
         }
         x.end().nl();
     }

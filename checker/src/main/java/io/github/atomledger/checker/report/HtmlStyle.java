@@ -60,8 +60,11 @@ final class HtmlStyle {
             .rule{font-family:ui-monospace,Menlo,Consolas,monospace;font-size:12px;color:var(--mute)}
             .fix{border-left:3px solid var(--info);padding:2px 8px;background:#eef5fb;margin:6px 0}
             figure.pic{margin:8px 0;overflow-x:auto}
-            figure.pic svg{max-width:100%;height:auto;background:#fff}
+            figure.pic .pic{width:100%;background:#fff var(--pic) no-repeat center/contain}
             figure.pic figcaption{font-size:12px;color:var(--mute)}
+            #show-idx:checked ~ main figure.pic .pic{background-image:var(--pic-idx)}
+            article.rxn{content-visibility:auto;contain-intrinsic-size:auto 420px}
+            #show-idx:checked ~ nav label[for=show-idx]{background:var(--ink);color:#fff}
             .nomap{color:var(--mute);font-size:13px;margin:4px 0}
             .lead-note{margin:6px 0 0;font-weight:600;color:var(--ink)}
             section.overview{padding:12px 28px 6px;background:#fff;border-bottom:1px solid var(--line)}

@@ -51,7 +51,7 @@ public final class JsonReporter implements Reporter {
     @Override
     public Path write(RunResult result, Path directory) throws IOException {
         Path file = directory.resolve(ReportFormat.JSON.fileName());
-        ReportFiles.write(file, toJson(result));
+        ReportFiles.write(file, JsonText.utf8(tree(result)));
         return file;
     }
 
@@ -227,10 +227,11 @@ public final class JsonReporter implements Reporter {
         m.elementDifference().forEach((k, v) -> diff.put(k, Long.toString(v)));
         o.put("elementDifference", diff);
         o.put("structures", new TreeMap<>(m.fingerprints()));
+        o.putAll(ConfidenceFields.of(m.confidence(), structures));
         return o;
     }
 
-    private static List<Object> transitions(List<AtomTransition> list, SpeciesStructures structures) {
+    static List<Object> transitions(List<AtomTransition> list, SpeciesStructures structures) {
         List<Object> out = new ArrayList<>();
         for (AtomTransition t : list) {
             Map<String, Object> o = new LinkedHashMap<>();
@@ -241,7 +242,7 @@ public final class JsonReporter implements Reporter {
         return out;
     }
 
-    private static Map<String, Object> atom(AtomRef a, SpeciesStructures structures) {
+    static Map<String, Object> atom(AtomRef a, SpeciesStructures structures) {
         Map<String, Object> o = new LinkedHashMap<>();
         o.put("species", a.species());
         o.put("copy", a.copy());

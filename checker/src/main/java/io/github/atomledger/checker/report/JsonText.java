@@ -1,12 +1,15 @@
 package io.github.atomledger.checker.report;
 
+import com.fasterxml.jackson.core.JsonEncoding;
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.core.json.JsonWriteFeature;
 import com.fasterxml.jackson.core.util.DefaultIndenter;
 import com.fasterxml.jackson.core.util.DefaultPrettyPrinter;
 
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
 import java.math.BigDecimal;
 import java.math.BigInteger;
 import java.util.Collection;
@@ -22,7 +25,9 @@ import java.util.Map;
  */
 final class JsonText {
 
-    private static final JsonFactory FACTORY = new JsonFactory();
+    /** Characters outside the BMP as UTF-8, not as escaped surrogate pairs (as the text writer did). */
+    private static final JsonFactory FACTORY = JsonFactory.builder()
+            .enable(JsonWriteFeature.COMBINE_UNICODE_SURROGATES_IN_UTF8).build();
 
     private JsonText() {
     }
@@ -34,15 +39,24 @@ final class JsonText {
      * @throws IllegalArgumentException for a value of any other type
      */
     static String of(Object tree) throws IOException {
+        return new String(utf8(tree), StandardCharsets.UTF_8);
+    }
+
+    /**
+     * The same text as UTF-8 bytes, written straight into a byte buffer: for yeast-GEM's 18 MB
+     * report, going through a {@code StringWriter} and encoding afterwards cost twice as long.
+     */
+    static byte[] utf8(Object tree) throws IOException {
         DefaultPrettyPrinter printer = new DefaultPrettyPrinter()
                 .withObjectIndenter(new DefaultIndenter("  ", "\n"))
                 .withArrayIndenter(new DefaultIndenter("  ", "\n"));
-        StringWriter out = new StringWriter(1 << 16);
-        try (JsonGenerator g = FACTORY.createGenerator(out)) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream(1 << 16);
+        try (JsonGenerator g = FACTORY.createGenerator(out, JsonEncoding.UTF8)) {
             g.setPrettyPrinter(printer);
             write(g, tree);
         }
-        return out.append('\n').toString();
+        out.write('\n');
+        return out.toByteArray();
     }
 
     private static void write(JsonGenerator g, Object value) throws IOException {

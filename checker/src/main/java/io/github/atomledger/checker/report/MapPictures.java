@@ -11,7 +11,6 @@ import io.github.atomledger.checker.check.mapping.ReactionMapping;
 import io.github.atomledger.checker.engine.ModelResult;
 import io.github.atomledger.checker.engine.ReactionResult;
 import io.github.atomledger.checker.model.Participant;
-import io.github.atomledger.checker.model.SpeciesInfo;
 
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -22,9 +21,8 @@ import java.util.Optional;
 
 /**
  * Turns an atom map (the engine's, or an atom-mapper result) into what the HTML report shows ({@link MapPicture}): the
- * status, a one-sentence summary, the notes, and the drawing with atom indices (the report hides them
- * until asked)
- * (drawn by atom-mapper's {@link ReactionPicture}; checker itself never touches CDK).
+ * status, a one-sentence summary, the notes, and what to draw ({@link PictureRequest}; the report
+ * draws it through atom-mapper's {@link ReactionPicture}, so checker itself never touches CDK).
  */
 public final class MapPictures {
 
@@ -39,13 +37,14 @@ public final class MapPictures {
      * @param titles molecule titles by species id (usually the species names)
      */
     public static MapPicture of(ReactionInput input, MappingResult result, Map<String, String> titles) {
-        String svg = ReactionPicture.drawable(result)
-                ? ReactionPicture.of(input, result).titles(titles).svg() : "";
+        PictureRequest drawing = ReactionPicture.drawable(result)
+                ? new PictureRequest(result.reactionId(), result.mappedSmiles(), expand(input.reactants()),
+                expand(input.products()), titlesOf(titles, input.reactants(), input.products())) : null;
         List<String> notes = new ArrayList<>(result.stereoNotes());
         if (result.status() == MappingStatus.AMBIGUOUS && !result.alternatives().isEmpty()) {
             notes.add(otherMaps(result.alternatives().size()));
         }
-        return new MapPicture(result.status().label(), summary(result), svg, notes);
+        return new MapPicture(result.status().label(), summary(result), drawing, null, notes);
     }
 
     /**
@@ -57,20 +56,48 @@ public final class MapPictures {
         if (m == null) {
             return Optional.empty();
         }
-        String svg = "";
+        PictureRequest drawing = null;
         if (m.hasMap() && !m.mappedSmiles().isEmpty()) {
+            List<String> left = molecules(reaction.reaction().reactants());
+            List<String> right = molecules(reaction.reaction().products());
             Map<String, String> titles = new HashMap<>();
-            for (SpeciesInfo s : model.model().species()) {
-                titles.put(s.id(), s.name());
+            for (List<String> side : List.of(left, right)) {
+                for (String id : side) {
+                    model.model().species(id).ifPresent(s -> titles.put(id, s.name()));
+                }
             }
-            svg = ReactionPicture.of(m.reactionId(), m.mappedSmiles(), molecules(reaction.reaction().reactants()),
-                    molecules(reaction.reaction().products())).titles(titles).svg();
+            drawing = new PictureRequest(m.reactionId(), m.mappedSmiles(), left, right, titles);
         }
         List<String> notes = new ArrayList<>(m.stereoNotes());
         if (!m.alternatives().isEmpty()) {
             notes.add(otherMaps(m.alternatives().size()));
         }
-        return Optional.of(new MapPicture(m.status().label(), summary(m), svg, notes));
+        return Optional.of(new MapPicture(m.status().label(), summary(m), drawing, null, notes));
+    }
+
+    private static List<String> expand(List<io.github.atomledger.atommapper.mapping.Participant> side) {
+        List<String> out = new ArrayList<>();
+        for (io.github.atomledger.atommapper.mapping.Participant p : side) {
+            for (int k = 0; k < p.coefficient(); k++) {
+                out.add(p.species());
+            }
+        }
+        return out;
+    }
+
+    private static Map<String, String> titlesOf(Map<String, String> titles,
+                                                List<io.github.atomledger.atommapper.mapping.Participant> left,
+                                                List<io.github.atomledger.atommapper.mapping.Participant> right) {
+        Map<String, String> out = new HashMap<>();
+        for (List<io.github.atomledger.atommapper.mapping.Participant> side : List.of(left, right)) {
+            for (io.github.atomledger.atommapper.mapping.Participant p : side) {
+                String t = titles.get(p.species());
+                if (t != null) {
+                    out.put(p.species(), t);
+                }
+            }
+        }
+        return out;
     }
 
     /** One entry per molecule the engine gave the mapper: species in document order, merged, copies repeated. */

@@ -10,6 +10,10 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.function.Supplier;
 
 /** Writes the selected report formats, in a fixed order. */
@@ -65,16 +69,104 @@ public final class Reporters {
         return new Reporters(list);
     }
 
-    /** Writes every report; returns the paths written, in format order (reports with nothing to say write nothing). */
+    /**
+     * Writes every report; returns the paths written, in format order (reports with nothing to
+     * say write nothing).
+     *
+     * @throws IOException when a report could not be written (after every other report was)
+     */
     public List<Path> write(RunResult result, Path directory) throws IOException {
-        List<Path> out = new ArrayList<>();
-        for (Reporter r : reporters) {
-            Path p = r.write(result, directory);
-            if (p != null) {
-                out.add(p);
+        Outcome out = writeAll(result, directory);
+        if (!out.failures().isEmpty()) {
+            Failure first = out.failures().get(0);
+            if (first.error() instanceof IOException io) {
+                throw io;
+            }
+            throw new IOException(first.message(), first.error());
+        }
+        return out.written();
+    }
+
+    /**
+     * Writes every report, each on its own: one that fails (a bug, a disk error) does not keep the
+     * others from being written. The caller decides what a failure means.
+     */
+    public Outcome writeAll(RunResult result, Path directory) {
+        // The reports are independent: on atomledger.threads they are written side by side (the
+        // JSON and the HTML of yeast-GEM take about the same time). Results stay in format order.
+        int threads = Math.min(reporters.size(), result.config().mapping().threads());
+        List<Object> outcomes = new ArrayList<>();
+        if (threads <= 1) {
+            reporters.forEach(r -> outcomes.add(writeOne(r, result, directory)));
+        } else {
+            ExecutorService pool = Executors.newFixedThreadPool(threads, task -> {
+                Thread t = new Thread(task, "atomledger-reports");
+                t.setDaemon(true);
+                return t;
+            });
+            try {
+                List<Future<Object>> futures = new ArrayList<>();
+                reporters.forEach(r -> futures.add(pool.submit(() -> writeOne(r, result, directory))));
+                for (int i = 0; i < futures.size(); i++) {
+                    outcomes.add(get(futures.get(i), reporters.get(i)));
+                }
+            } finally {
+                pool.shutdownNow();
             }
         }
-        return out;
+        List<Path> written = new ArrayList<>();
+        List<Failure> failures = new ArrayList<>();
+        for (Object o : outcomes) {
+            if (o instanceof Path p) {
+                written.add(p);
+            } else if (o instanceof Failure f) {
+                failures.add(f);
+            }
+        }
+        return new Outcome(written, failures);
+    }
+
+    /** The file written (null when the report had nothing to write), or the {@link Failure}. */
+    private static Object writeOne(Reporter r, RunResult result, Path directory) {
+        try {
+            return r.write(result, directory);
+        } catch (IOException | RuntimeException e) {
+            return new Failure(r.format(), e);
+        }
+    }
+
+    private static Object get(Future<Object> f, Reporter r) {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return new Failure(r.format(), new IllegalStateException("interrupted", e));
+        } catch (ExecutionException e) {
+            // An Error (out of memory, say) is not a report failure: it ends the run.
+            if (e.getCause() instanceof Error err) {
+                throw err;
+            }
+            return new Failure(r.format(), new IllegalStateException(e.getCause()));
+        }
+    }
+
+    /** The reports written (format order) and those that failed. */
+    public record Outcome(List<Path> written, List<Failure> failures) {
+        public Outcome {
+            written = List.copyOf(written);
+            failures = List.copyOf(failures);
+        }
+    }
+
+    /** A report that could not be written, and why. */
+    public record Failure(ReportFormat format, Exception error) {
+
+        /** One sentence: which report and the error's own message (which names the item). */
+        public String message() {
+            String why = error.getMessage() == null ? error.toString() : error.getMessage();
+            return "the " + format.label() + " report could not be written: "
+                    + (error instanceof IOException ? "" : error.getClass().getSimpleName() + ": ") + why;
+        }
     }
 
     /** The formats that this build can write. */

@@ -43,7 +43,7 @@ public final class SarifReporter implements Reporter {
     @Override
     public Path write(RunResult result, Path directory) throws IOException {
         Path file = directory.resolve(ReportFormat.SARIF.fileName());
-        ReportFiles.write(file, toSarif(result));
+        ReportFiles.write(file, JsonText.utf8(tree(result)));
         return file;
     }
 

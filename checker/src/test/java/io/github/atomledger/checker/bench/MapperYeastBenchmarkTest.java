@@ -108,19 +108,9 @@ class MapperYeastBenchmarkTest {
         assumeTrue(data != null && Files.isRegularFile(data.resolve("yeast-GEM.structures.tsv")),
                 "shared data folder with yeast-GEM is absent");
         StringBuilder report = new StringBuilder();
-        Map<String, Structure> structures = new HashMap<>();
-        int badSmiles = 0;
-        try (BufferedReader in = Files.newBufferedReader(data.resolve("yeast-GEM.structures.tsv"), StandardCharsets.UTF_8)) {
-            in.readLine();
-            for (String line = in.readLine(); line != null; line = in.readLine()) {
-                String[] cols = line.split("\t");
-                try {
-                    structures.put(cols[0], Structure.fromSmiles(cols[1]));
-                } catch (StructureException e) {
-                    badSmiles++;
-                }
-            }
-        }
+        int[] bad = new int[1];
+        Map<String, Structure> structures = structures(data, bad);
+        int badSmiles = bad[0];
         List<ReactionInput> inputs = new ArrayList<>();
         List<MappingResult> rejected = new ArrayList<>();
         int oneSided = 0;
@@ -203,7 +193,24 @@ class MapperYeastBenchmarkTest {
         assertThat(results).isNotEmpty();
     }
 
-    private static String fractional(Raw raw) {
+    /** The parsed SMILES of yeast-GEM.structures.tsv by species; {@code bad[0]} counts those that do not parse. */
+    static Map<String, Structure> structures(Path data, int[] bad) throws IOException {
+        Map<String, Structure> structures = new HashMap<>();
+        try (BufferedReader in = Files.newBufferedReader(data.resolve("yeast-GEM.structures.tsv"), StandardCharsets.UTF_8)) {
+            in.readLine();
+            for (String line = in.readLine(); line != null; line = in.readLine()) {
+                String[] cols = line.split("\t");
+                try {
+                    structures.put(cols[0], Structure.fromSmiles(cols[1]));
+                } catch (StructureException e) {
+                    bad[0]++;
+                }
+            }
+        }
+        return structures;
+    }
+
+    static String fractional(Raw raw) {
         for (Map<String, Double> side : List.of(raw.reactants(), raw.products())) {
             for (Map.Entry<String, Double> e : side.entrySet()) {
                 if (e.getValue() != Math.rint(e.getValue()) || e.getValue() < 1) {
@@ -214,7 +221,7 @@ class MapperYeastBenchmarkTest {
         return null;
     }
 
-    private static List<Participant> side(Map<String, Double> side, Map<String, Structure> structures) {
+    static List<Participant> side(Map<String, Double> side, Map<String, Structure> structures) {
         List<Participant> out = new ArrayList<>();
         side.forEach((species, coefficient) -> out.add(new Participant(species, structures.get(species),
                 (int) Math.round(coefficient))));

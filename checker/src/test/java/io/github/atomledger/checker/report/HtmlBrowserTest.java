@@ -89,7 +89,7 @@ class HtmlBrowserTest {
         assertThat(dom).contains("AtomLedger report").contains("reactions by class").contains("findings by severity")
                 .contains("atom maps");
         assertThat(count(dom, "<article")).isEqualTo(64);
-        assertThat(count(dom, "<svg")).isGreaterThanOrEqualTo(20);
+        assertThat(count(dom, "<div class=\"pic\" role=\"img\"")).isGreaterThanOrEqualTo(20);
         assertThat(dom).contains("R_FBA").contains("fructose-bisphosphate aldolase");
     }
 

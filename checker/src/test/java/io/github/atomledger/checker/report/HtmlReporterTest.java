@@ -7,6 +7,11 @@ import io.github.atomledger.checker.engine.RunResult;
 import java.io.StringReader;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Stream;
 import javax.xml.parsers.DocumentBuilderFactory;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -57,16 +62,37 @@ class HtmlReporterTest {
     }
 
     @Test
-    void drawsTheEnginesAtomMapsAndSaysWhyOthersHaveNone() {
+    void drawsTheEnginesAtomMapsAndSaysWhyOthersHaveNone() throws Exception {
         long withMap = result.models().get(0).reactions().stream().filter(r -> r.mapping() != null
                 && r.mapping().hasMap()).count();
         assertThat(withMap).isGreaterThan(20);
         assertThat(html).contains("id=\"m0-R_FBA\"");
-        int svgs = withoutTraces(html).split("<svg", -1).length - 1;
-        assertThat((long) svgs).as("one picture per map (the carbon traces draw their own)").isEqualTo(withMap);
-        // Issue #13: coloured carbons carry their labels always (no toggle); unchanged cofactors are muted.
-        assertThat(html).contains("class=\"annotation\"").doesNotContain("id=\"show-idx\"");
-        assertThat(html).containsPattern("opacity=\"0\\.3\" class=\"muted (bond|atom)\"");
+        Matcher m = Pattern.compile("style=\"--pic:url\\(pictures/([0-9a-f]{32}\\.svg)\\);").matcher(html);
+        Set<String> files = new TreeSet<>();
+        long pictures = 0;
+        while (m.find()) {
+            pictures++;
+            files.add(m.group(1));
+        }
+        assertThat(pictures).as("one picture per map").isEqualTo(withMap);
+        for (String f : files) {
+            String svg = Files.readString(OUT.resolve("pictures").resolve(f));
+            assertThat(svg).startsWith("<?xml").contains("#indices:target");
+            assertThat(html).contains("--pic-idx:url(pictures/" + f + "#indices)");
+        }
+        try (Stream<Path> all = Files.list(OUT.resolve("pictures"))) {
+            assertThat(all.count()).as("nothing but the pictures the page shows").isEqualTo(files.size());
+        }
+        assertThat(html).contains("id=\"show-idx\"").doesNotContain("<img");
+        // Issue #13: coloured carbons carry their labels always; unchanged cofactors are muted.
+        String allSvg = files.stream().map(f -> {
+            try {
+                return Files.readString(OUT.resolve("pictures").resolve(f));
+            } catch (java.io.IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        }).collect(java.util.stream.Collectors.joining());
+        assertThat(allSvg).containsPattern("class='muted[^']*' opacity='0\\.3'");
         assertThat(html).as("exchange reactions are not mapped").contains("Not attempted: ");
     }
 
@@ -87,7 +113,8 @@ class HtmlReporterTest {
     void rendersWithoutMappingData() throws Exception {
         String plain = new HtmlReporter(MappingSource.NONE).toHtml(result);
         parse(plain);
-        assertThat(withoutTraces(plain)).doesNotContain("<svg").contains("No atom map for this reaction: balance only.");
+        assertThat(withoutTraces(plain)).doesNotContain("<img").doesNotContain("--pic:")
+                .contains("No atom map for this reaction: balance only.");
     }
 
     /** The page without its carbon-trace section (issue #14), which draws from the traces, not the mapping source. */

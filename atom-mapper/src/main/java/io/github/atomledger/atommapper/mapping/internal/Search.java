@@ -46,8 +46,6 @@ public final class Search {
     private final int[] sameMolecule;
     private final Ordering ordering;
     private final LocalSearch polish;
-    private final long deadline;
-    private final long nodeLimit;
 
     final int[] map;
     final int[] inv;
@@ -59,6 +57,12 @@ public final class Search {
     private int upper = Integer.MAX_VALUE;
     private int threshold;
     private boolean enumerate;
+    private boolean runnerUp;
+    private Set<String> excluded = Set.of();
+    private int runnerUpper = Integer.MAX_VALUE;
+    private int[] runnerBest;
+    private long phaseDeadline;
+    private long phaseNodeLimit;
     private boolean completing;
     private boolean completed;
     private int openMin = Integer.MAX_VALUE;
@@ -75,8 +79,8 @@ public final class Search {
         this.r = r;
         this.p = p;
         this.pin = pin;
-        this.deadline = deadlineNanos;
-        this.nodeLimit = options.nodeLimit();
+        this.phaseDeadline = deadlineNanos;
+        this.phaseNodeLimit = options.nodeLimit();
         this.bounds = new Bounds(r, p, options);
         this.polish = new LocalSearch(r, p, options, pin);
         this.map = new int[r.n];
@@ -180,6 +184,99 @@ public final class Search {
         return new ArrayList<>(carbonMaps.values());
     }
 
+    /**
+     * The carbon symmetry class of a complete map, in the form {@link #coOptimalClasses()} uses:
+     * two maps have the same key exactly when they send every reactant carbon class to the same
+     * product carbon classes, counted with multiplicity.
+     */
+    public String carbonClass(int[] complete) {
+        long[] pairs = new long[carbonDone];
+        for (int k = 0; k < carbonDone; k++) {
+            int u = carbonOrder[k];
+            pairs[k] = ((long) r.orbitKey[u] << 32) | p.orbitKey[complete[u]];
+        }
+        Arrays.sort(pairs);
+        return Arrays.toString(pairs);
+    }
+
+    /** The carbon classes of {@link #coOptimal()}, same order. */
+    public List<String> coOptimalClasses() {
+        return new ArrayList<>(carbonMaps.keySet());
+    }
+
+    /** True when the reaction has carbons, so carbon fates can differ at all. */
+    public boolean hasCarbons() {
+        return carbonDone > 0;
+    }
+
+    /**
+     * Phase 3, the runner-up: the cheapest complete map whose carbon class is none of
+     * {@code excluded} (normally every class phase 2 found at the optimum), among maps cheaper
+     * than {@code limit}. The same depth-first search with the carbons first; a carbon assignment
+     * whose class is excluded is cut as soon as the last carbon is placed, and every other subtree
+     * is searched for its cheapest completion under the usual bounds and symmetry pruning. The
+     * first incumbent comes from cheap swaps of {@code from}, a map of cost {@code fromCost}
+     * (see {@link LocalSearch#otherClass}). Runs on its own budget: {@code deadlineNanos} on
+     * {@link SearchClock} and {@code nodes} more search nodes. Phases 1 and 2 need not have run.
+     *
+     * @return true when finished: {@link #runnerUp()} is then the proven cheapest such map, or
+     *     null when there is none below the limit; false when the budget ran out
+     */
+    public boolean searchRunnerUp(Set<String> excluded, int[] from, int fromCost, int limit, long deadlineNanos,
+                                  long nodes) {
+        enumerate = false;
+        runnerUp = true;
+        this.excluded = excluded;
+        order = carbonOrder;
+        stop = false;
+        openMin = Integer.MAX_VALUE;
+        runnerUpper = limit;
+        runnerBest = null;
+        phaseDeadline = deadlineNanos;
+        phaseNodeLimit = nodes == Long.MAX_VALUE ? Long.MAX_VALUE : this.nodes + nodes;
+        if (carbonDone > 0) {
+            // A cheap map of another class as the first incumbent: the search then only has to
+            // look for cheaper ones, which is most of the pruning.
+            int[] seedCost = new int[1];
+            int[] seed = polish.otherClass(from, fromCost, m -> !excluded.contains(carbonClass(m)), seedCost);
+            if (seed != null && seedCost[0] < runnerUpper) {
+                runnerBest = seed;
+                runnerUpper = seedCost[0];
+            }
+            dfs(0, 0);
+        }
+        runnerUp = false;
+        return !stop;
+    }
+
+    /** The exact cost of a complete map under this search's weights. */
+    public int cost(int[] complete) {
+        return polish.cost(complete);
+    }
+
+    /** The runner-up found by {@link #searchRunnerUp}, or null. */
+    public int[] runnerUp() {
+        return runnerBest == null ? null : runnerBest.clone();
+    }
+
+    /** Cost of {@link #runnerUp()}; the limit when none was found. */
+    public int runnerUpCost() {
+        return runnerUpper;
+    }
+
+    /**
+     * A proven lower bound on the runner-up's cost after {@link #searchRunnerUp}: its cost when
+     * the search finished, else the least bound among the subtrees left open, and never below
+     * {@code floor} (the optimum plus one, as every map of another class costs more than the
+     * optimum).
+     */
+    public int runnerUpLowerBound(int floor) {
+        if (!stop) {
+            return runnerUpper;
+        }
+        return Math.max(floor, Math.min(openMin, runnerUpper));
+    }
+
     /** Search nodes visited so far. */
     public long nodes() {
         return nodes;
@@ -187,19 +284,24 @@ public final class Search {
 
     private void dfs(int depth, int g) {
         nodes++;
-        if ((nodes & 255) == 0 && (best != null || enumerate) && (nodes > nodeLimit || SearchClock.now() > deadline)) {
+        if ((nodes & 255) == 0 && (best != null || enumerate || runnerUp)
+                && (nodes > phaseNodeLimit || SearchClock.now() > phaseDeadline)) {
             stop = true;
         }
         if (stop) {
             openMin = Math.min(openMin, g + bounds.bound(map, inv));
             return;
         }
-        if (depth == r.n) {
-            leaf(g);
-            return;
-        }
+        // The carbon-level checks come before the leaf test: without heteroatoms the last carbon is the leaf.
         if (enumerate && !completing && depth == carbonDone) {
             complete(depth, g);
+            return;
+        }
+        if (runnerUp && depth == carbonDone && excluded.contains(classKey(depth))) {
+            return;
+        }
+        if (depth == r.n) {
+            leaf(g);
             return;
         }
         int u = order[depth];
@@ -234,13 +336,16 @@ public final class Search {
             if (completing && completed) {
                 return;
             }
-            if (!enumerate && upper <= bounds.rootBound()) {
+            if (!enumerate && !runnerUp && upper <= bounds.rootBound()) {
                 return;
             }
         }
     }
 
     private boolean cut(int bound) {
+        if (runnerUp) {
+            return bound >= runnerUpper;
+        }
         return enumerate ? bound > threshold : bound >= upper;
     }
 
@@ -306,7 +411,12 @@ public final class Search {
     }
 
     private void leaf(int g) {
-        if (enumerate) {
+        if (runnerUp) {
+            if (g < runnerUpper) {
+                runnerUpper = g;
+                runnerBest = map.clone();
+            }
+        } else if (enumerate) {
             completed = true;
             completedMap = map.clone();
         } else if (g < upper) {

@@ -21,6 +21,8 @@ import java.util.TreeMap;
  * (unknown atoms, non-carbons, atoms used twice or not at all), and {@code mapping.curated-differs}
  * when it is valid but differs from every minimum-cost map (not merely by symmetry): the finding
  * names the carbons that go elsewhere and how many more weighted bond edits the curated map needs.
+ * A map within the review margin of the optimum is not reported here ("criterion undecided", see
+ * {@link MappingReviewCheck}).
  * A curated map can be right where the criterion is not (enzymes do not always take the
  * cheapest route); the finding asks for a look, it does not settle the chemistry.
  */
@@ -71,7 +73,7 @@ public final class CuratedMapCheck implements ModelCheck {
                 }
                 out.add(context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id() + from
                         + " is invalid: " + String.join("; ", v.problems()) + ".", data));
-            } else if (!validity && v.valid() && !v.agrees() && !v.differing().isEmpty()) {
+            } else if (!validity && v.valid() && !v.agrees() && !v.undecided() && !v.differing().isEmpty()) {
                 Map<String, String> data = new TreeMap<>();
                 List<String> moved = new ArrayList<>();
                 List<String> named = new ArrayList<>();

@@ -17,9 +17,20 @@ import java.util.Objects;
  * @param extraCost    weighted bond edits the curated map needs beyond the optimum (0 when it
  *                     agrees, -1 when unknown)
  * @param differing    curated transitions that differ from the optimum (the carbons that go elsewhere)
+ * @param undecided    true when the map differs but is accepted because the criterion cannot
+ *                     decide against it ("curated, criterion undecided"): it costs at most the review
+ *                     margin more than the optimum, or the optimum shows a rearrangement pattern or a
+ *                     weight-dependent fate and it costs at most one moved C–C bond (twice the C–C
+ *                     weight) more
  */
 public record CuratedVerdict(String reactionId, List<String> problems, boolean agrees, int extraCost,
-                             List<AtomTransition> differing) {
+                             List<AtomTransition> differing, boolean undecided) {
+
+    /** A verdict that is not "criterion undecided". */
+    public CuratedVerdict(String reactionId, List<String> problems, boolean agrees, int extraCost,
+                          List<AtomTransition> differing) {
+        this(reactionId, problems, agrees, extraCost, differing, false);
+    }
 
     public CuratedVerdict {
         Objects.requireNonNull(reactionId, "reactionId");

@@ -1,5 +1,6 @@
 package io.github.atomledger.checker.check.mapping;
 
+import io.github.atomledger.atommapper.mapping.MapConfidence;
 import io.github.atomledger.checker.transitions.TransitionAnnotation;
 import io.github.atomledger.checker.check.structure.SpeciesStructures;
 
@@ -8,19 +9,27 @@ import java.util.Optional;
 
 /**
  * Mapping results of one model for the checks: per-reaction maps, curated-map verdicts, the
- * annotations stored in the model, the resolved species structures and the curated maps read from
- * RXN files ({@code imported}, by reaction id). {@link #NONE} when mapping was not run. Immutable.
+ * annotations stored in the model, the resolved species structures, the curated maps read from
+ * RXN files ({@code imported}, by reaction id) and the review margin the run was configured with.
+ * {@link #NONE} when mapping was not run. Immutable.
  */
 public record MappingData(boolean enabled, Map<String, ReactionMapping> mappings,
                           Map<String, CuratedVerdict> curated, Map<String, TransitionAnnotation> stored,
-                          SpeciesStructures structures, Map<String, ImportedMap> imported) {
+                          SpeciesStructures structures, Map<String, ImportedMap> imported, int reviewMargin) {
 
     public static final MappingData NONE = new MappingData(false, Map.of(), Map.of(), Map.of(), SpeciesStructures.EMPTY);
 
-    /** Without curated map files. */
+    /** Without curated map files, with the default review margin. */
     public MappingData(boolean enabled, Map<String, ReactionMapping> mappings, Map<String, CuratedVerdict> curated,
                        Map<String, TransitionAnnotation> stored, SpeciesStructures structures) {
         this(enabled, mappings, curated, stored, structures, Map.of());
+    }
+
+    /** With the default review margin. */
+    public MappingData(boolean enabled, Map<String, ReactionMapping> mappings, Map<String, CuratedVerdict> curated,
+                       Map<String, TransitionAnnotation> stored, SpeciesStructures structures,
+                       Map<String, ImportedMap> imported) {
+        this(enabled, mappings, curated, stored, structures, imported, MapConfidence.DEFAULT_REVIEW_MARGIN);
     }
 
     public MappingData {

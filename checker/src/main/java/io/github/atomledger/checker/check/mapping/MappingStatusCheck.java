@@ -19,7 +19,8 @@ import java.util.TreeMap;
  * {@code mapping.unmappable} (heavy atoms do not balance, or a coefficient is not whole),
  * {@code mapping.ambiguous} (co-optimal maps send a carbon to different places),
  * {@code mapping.budget-reached} (best map found, optimality not proven in the time budget),
- * {@code mapping.too-large} (a molecule over the size cap), and
+ * {@code mapping.too-large} (a molecule over the size cap),
+ * {@code mapping.mapper-failed} (the mapper threw on the reaction: see {@link MapperFailure}), and
  * {@code mapping.stereo-pin-needed} (a map that is unique only up to a symmetry an enzyme breaks,
  * such as citrate's two arms, and that no curated map pins).
  * Minimum weighted bond edits is a chemical criterion, not proof of mechanism: a "mapped" reaction
@@ -28,7 +29,7 @@ import java.util.TreeMap;
 public final class MappingStatusCheck implements ModelCheck {
 
     /** Which outcome this instance reports. */
-    public enum Kind { UNMAPPABLE, AMBIGUOUS, BUDGET_REACHED, TOO_LARGE, STEREO_PIN_NEEDED }
+    public enum Kind { UNMAPPABLE, AMBIGUOUS, BUDGET_REACHED, TOO_LARGE, STEREO_PIN_NEEDED, MAPPER_FAILED }
 
     private final Kind kind;
 
@@ -52,6 +53,7 @@ public final class MappingStatusCheck implements ModelCheck {
             case BUDGET_REACHED -> "mapping.budget-reached";
             case TOO_LARGE -> "mapping.too-large";
             case STEREO_PIN_NEEDED -> "mapping.stereo-pin-needed";
+            case MAPPER_FAILED -> "mapping.mapper-failed";
         };
     }
 
@@ -63,13 +65,14 @@ public final class MappingStatusCheck implements ModelCheck {
             case BUDGET_REACHED -> "The mapper's time budget ran out before the best map was proven optimal.";
             case TOO_LARGE -> "A participant is larger than the mapper's size cap, so the reaction was not mapped.";
             case STEREO_PIN_NEEDED -> "The map is unique only up to a symmetry that enzymes distinguish; pin it with a curated map.";
+            case MAPPER_FAILED -> "The atom mapper (or the chemistry library below it) failed on a reaction; it has no map.";
         };
     }
 
     @Override
     public Severity defaultSeverity() {
         return switch (kind) {
-            case UNMAPPABLE -> Severity.ERROR;
+            case UNMAPPABLE, MAPPER_FAILED -> Severity.ERROR;
             case AMBIGUOUS, BUDGET_REACHED, TOO_LARGE -> Severity.WARNING;
             case STEREO_PIN_NEEDED -> Severity.INFO;
         };
@@ -92,6 +95,10 @@ public final class MappingStatusCheck implements ModelCheck {
                         "The map of reaction " + r.id() + " is the best found within the time budget (cost " + m.cost()
                                 + ", proven lower bound " + m.lowerBound() + "), not proven optimal.",
                         Map.of("cost", Integer.toString(m.cost()), "lowerBound", Integer.toString(m.lowerBound()))) : null;
+                case MAPPER_FAILED -> MapperFailure.is(m) ? context.finding(this, r.id(), r.line(), "Reaction " + r.id()
+                        + " has no atom map because " + m.reason() + "; please report it with the reaction's structures.",
+                        Map.of("error", m.reason().substring(MapperFailure.REASON.length()).replaceFirst("^[^:]*: ", ""),
+                                "species", String.join(" ", speciesOf(r)))) : null;
                 case TOO_LARGE -> m.status() == MapStatus.SKIPPED && m.reason().startsWith("too large")
                         ? context.finding(this, r.id(), r.line(), "Reaction " + r.id() + " was not mapped: " + m.reason() + ".",
                         Map.of("reason", m.reason())) : null;
@@ -105,6 +112,12 @@ public final class MappingStatusCheck implements ModelCheck {
                 out.add(f);
             }
         }
+        return out;
+    }
+
+    private static java.util.SortedSet<String> speciesOf(ReactionInfo r) {
+        java.util.SortedSet<String> out = new java.util.TreeSet<>();
+        r.participants().forEach(p -> out.add(p.species()));
         return out;
     }
 

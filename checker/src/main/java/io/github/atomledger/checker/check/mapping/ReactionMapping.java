@@ -1,6 +1,7 @@
 package io.github.atomledger.checker.check.mapping;
 
 import io.github.atomledger.atommapper.mapping.AtomTransition;
+import io.github.atomledger.atommapper.mapping.MapConfidence;
 
 import java.util.Collections;
 import java.util.List;
@@ -25,12 +26,14 @@ import java.util.TreeMap;
  * @param elementDifference heavy-atom differences (products − reactants) for unmappable
  * @param missingStructures participants without a structure (no-structure), sorted
  * @param fingerprints      species to structure fingerprint, for the participants used
+ * @param confidence        margin to the runner-up, rearrangement patterns and alternative
+ *                          weightings ({@link MapConfidence#NONE} when not computed)
  */
 public record ReactionMapping(String reactionId, MapStatus status, List<AtomTransition> carbons,
                               List<List<AtomTransition>> alternatives, int cost, int lowerBound,
                               String mappedSmiles, List<String> stereoNotes, String reason,
                               SortedMap<String, Long> elementDifference, List<String> missingStructures,
-                              SortedMap<String, String> fingerprints) {
+                              SortedMap<String, String> fingerprints, MapConfidence confidence) {
 
     public ReactionMapping {
         Objects.requireNonNull(reactionId, "reactionId");
@@ -43,6 +46,16 @@ public record ReactionMapping(String reactionId, MapStatus status, List<AtomTran
         elementDifference = Collections.unmodifiableSortedMap(new TreeMap<>(elementDifference));
         missingStructures = missingStructures.stream().sorted().toList();
         fingerprints = Collections.unmodifiableSortedMap(new TreeMap<>(fingerprints));
+        confidence = confidence == null ? MapConfidence.NONE : confidence;
+    }
+
+    /** A mapping without a confidence analysis. */
+    public ReactionMapping(String reactionId, MapStatus status, List<AtomTransition> carbons,
+                           List<List<AtomTransition>> alternatives, int cost, int lowerBound, String mappedSmiles,
+                           List<String> stereoNotes, String reason, SortedMap<String, Long> elementDifference,
+                           List<String> missingStructures, SortedMap<String, String> fingerprints) {
+        this(reactionId, status, carbons, alternatives, cost, lowerBound, mappedSmiles, stereoNotes, reason,
+                elementDifference, missingStructures, fingerprints, MapConfidence.NONE);
     }
 
     /** A result with no map: skipped, no-structure or unmappable before mapping. */
