@@ -12,5 +12,5 @@ assert errors[0].data.differing == 'M_2pg_c#1:2->M_pep_c#1:8,M_2pg_c#1:9->M_pep_
 assert errors[0].data.file == 'maps-curated/R_ENO.rxn'
 assert (errors[0].data.extraCost as int) > 0
 assert eno.mapping.status == 'mapped'
-assert new File(basedir, 'build.log').text.contains('mapping.curated-differs R_ENO')
+assert new File(basedir, 'build.log').text.contains('mapping.curated-differs (1): R_ENO')
 return true

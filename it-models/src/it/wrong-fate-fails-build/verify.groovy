@@ -12,5 +12,5 @@ assert d.pathway == 'threonine' && d.carbon == 'C3' && d.expected == 'gly_c' && 
 assert d.step == 'R_KBL' && d.stepIndex == '2' && d.expectation == 'models/fates.tsv:4'
 assert errors[0].message.contains('they part at step 2, R_KBL')
 assert all.findAll { it.severity == 'warning' }.isEmpty()
-assert new File(basedir, 'build.log').text.contains('trace.fate-differs thr_c')
+assert new File(basedir, 'build.log').text.contains('trace.fate-differs (1): thr_c')
 return true
