@@ -29,7 +29,7 @@ assert tpi.runnerUp.carbon.collect { [it.from.atom, it.to.atom] }.toSorted() == 
 
 // The finding names the carbons at stake and where the runner-up sends them, in every format; the
 // HTML also shows the runner-up's whole carbon map next to the drawing.
-def moved = 'sends carbon(s) dhap: 2 5 elsewhere (dhap: 2 5 = g3p: 5 2)'
+def moved = 'sends carbons dhap: 2 5 elsewhere (dhap: 2 5 = g3p: 5 2)'
 assert review.message.contains(moved)
 def sarif = new JsonSlurper().parse(new File(dir, 'report.sarif'))
 assert sarif.runs[0].results.any { it.ruleId == 'mapping.review' && it.message.text.contains(moved) }

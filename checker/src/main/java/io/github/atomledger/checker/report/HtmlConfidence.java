@@ -33,7 +33,8 @@ final class HtmlConfidence {
             x.attr("open", "open");
         }
         String margin = !c.hasMargin() ? "no other carbon fate is possible"
-                : "margin " + (c.marginProven() ? "" : "at least ") + c.margin() + " weighted bond edit(s) to the runner-up";
+                : "margin " + (c.marginProven() ? "" : "at least ")
+                + io.github.atomledger.checker.Wording.count(c.margin(), "weighted bond edit") + " to the runner-up";
         x.leaf("summary", null, "confidence: " + margin);
         List<String> lines = new ArrayList<>();
         for (Rearrangement r : c.rearrangements()) {

@@ -5,6 +5,7 @@ import io.github.atomledger.atommapper.mapping.AtomTransition;
 import io.github.atomledger.atommapper.mapping.MapConfidence;
 import io.github.atomledger.atommapper.mapping.Rearrangement;
 import io.github.atomledger.atommapper.mapping.WeightCheck;
+import io.github.atomledger.checker.Wording;
 import io.github.atomledger.checker.check.CheckContext;
 import io.github.atomledger.checker.check.Finding;
 import io.github.atomledger.checker.check.ModelCheck;
@@ -123,8 +124,8 @@ public final class MappingReviewCheck implements ModelCheck {
             data.put("marginProven", Boolean.toString(c.marginProven()));
         }
         if (reasons.contains(MapConfidence.Reason.MARGIN)) {
-            why.add("it beats the runner-up by only " + (c.marginProven() ? "" : "at least ") + c.margin()
-                    + " weighted bond edit(s)");
+            why.add("it beats the runner-up by only " + (c.marginProven() ? "" : "at least ")
+                    + Wording.count(c.margin(), "weighted bond edit"));
         }
         String runner = "";
         if (!c.runnerUp().isEmpty()) {
@@ -133,9 +134,10 @@ public final class MappingReviewCheck implements ModelCheck {
             data.put("atStake", atoms(c.atStake(), (species, atom) -> Integer.toString(atom)));
             SpeciesStructures structures = context.mapping().structures();
             List<String> lines = CarbonMapText.format(moved(c.runnerUp(), c.atStake()), structures::label);
-            String dearer = reasons.contains(MapConfidence.Reason.MARGIN) ? "" : " (" + c.margin()
-                    + (c.marginProven() ? "" : " or more") + " weighted bond edit(s) dearer)";
-            runner = "; the runner-up" + dearer + " sends carbon(s) " + atoms(c.atStake(), structures::label) + " elsewhere ("
+            String dearer = reasons.contains(MapConfidence.Reason.MARGIN) ? "" : " (dearer by "
+                    + (c.marginProven() ? "" : "at least ") + Wording.count(c.margin(), "weighted bond edit") + ")";
+            runner = "; the runner-up" + dearer + " sends " + (c.atStake().size() == 1 ? "carbon " : "carbons ")
+                    + atoms(c.atStake(), structures::label) + " elsewhere ("
                     + String.join("; ", lines.subList(0, Math.min(QUOTED_LINES, lines.size())))
                     + (lines.size() > QUOTED_LINES ? "; ..." : "") + ")";
         }
@@ -155,8 +157,8 @@ public final class MappingReviewCheck implements ModelCheck {
         data.put("extraCost", Integer.toString(v.extraCost()));
         data.put("reviewMargin", Integer.toString(reviewMargin));
         return context.finding(this, r.id(), r.line(), "The curated carbon map of reaction " + r.id()
-                + " differs from the minimum bond-edit map by " + v.extraCost()
-                + " weighted bond edit(s), closer than the criterion can decide; it is accepted (curated, criterion undecided).",
+                + " differs from the minimum bond-edit map by " + Wording.count(v.extraCost(), "weighted bond edit")
+                + ", closer than the criterion can decide; it is accepted (curated, criterion undecided).",
                 data);
     }
 

@@ -59,8 +59,8 @@ class MappingReviewCheckTest {
                 .containsEntry("runnerUp", "alac: 1 2 4 5 7 = dhmb: 3 2 5 1 7");
         assertThat(review.message()).isEqualTo("The map of reaction R_KARI may not show the enzyme's carbon fate: "
                 + "with a C–C weight of 2 another carbon fate is as cheap (1,2-shift: the carbon group at alac atom 5 leaves "
-                + "atom 4 for its neighbour atom 2); the runner-up (2 weighted bond edit(s) dearer) "
-                + "sends carbon(s) alac: 1 2 4 7 elsewhere (alac: 1 2 4 7 = dhmb: 3 2 5 7); pin the intended map with a "
+                + "atom 4 for its neighbour atom 2); the runner-up (dearer by 2 weighted bond edits) "
+                + "sends carbons alac: 1 2 4 7 elsewhere (alac: 1 2 4 7 = dhmb: 3 2 5 7); pin the intended map with a "
                 + "curated carbon map.");
     }
 
@@ -79,7 +79,7 @@ class MappingReviewCheckTest {
         assertThat(findings(standard, "R_TPI")).isEmpty();
         assertThat(findings(wide, "R_TPI")).extracting(Finding::ruleId).containsExactly("mapping.review");
         assertThat(findings(wide, "R_TPI").get(0).data()).containsEntry("reasons", "margin").containsEntry("margin", "2");
-        assertThat(findings(wide, "R_TPI").get(0).message()).contains("it beats the runner-up by only 2 weighted bond edit(s)");
+        assertThat(findings(wide, "R_TPI").get(0).message()).contains("it beats the runner-up by only 2 weighted bond edits");
     }
 
     @Test
