@@ -13,6 +13,7 @@ import io.github.atomledger.checker.engine.RunResult;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.IdentityHashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -97,8 +98,10 @@ public final class HtmlReporter implements Reporter {
 
     private String page(RunResult result, Path directory) {
         try {
-            Map<ModelResult, Map<String, MapPicture>> maps = new LinkedHashMap<>();
-            Map<ModelResult, String> prefixes = new LinkedHashMap<>();
+            // Keyed by identity: a ModelResult is a record whose hash walks the whole model (every
+            // reaction, map and finding), which on a genome-scale model costs milliseconds per lookup.
+            Map<ModelResult, Map<String, MapPicture>> maps = new IdentityHashMap<>();
+            Map<ModelResult, String> prefixes = new IdentityHashMap<>();
             TreeSet<String> rules = new TreeSet<>();
             TreeSet<String> statuses = new TreeSet<>();
             TreeSet<String> severities = new TreeSet<>();
@@ -183,9 +186,9 @@ public final class HtmlReporter implements Reporter {
      */
     private static void drawPictures(RunResult result, Map<ModelResult, Map<String, MapPicture>> maps, Path directory) {
         List<PictureRequest> requests = new ArrayList<>();
-        for (Map.Entry<ModelResult, Map<String, MapPicture>> e : maps.entrySet()) {
-            for (ReactionResult r : HtmlModel.ordered(e.getKey(), result)) {
-                MapPicture p = e.getValue().get(r.id());
+        for (ModelResult m : result.models()) {
+            for (ReactionResult r : HtmlModel.ordered(m, result)) {
+                MapPicture p = maps.get(m).get(r.id());
                 if (p != null && p.drawing() != null && requests.size() < MAX_PICTURES) {
                     requests.add(p.drawing());
                 }
