@@ -49,4 +49,20 @@ class ParameterValuesTest {
         assertThatThrownBy(() -> ParameterValues.positive("maxHeavyAtoms", "0", 400))
                 .hasMessageContaining("atomledger.maxHeavyAtoms='0'");
     }
+
+    @Test
+    void confidenceBudgetMayBeZeroAndReviewMarginNotNegative() throws Exception {
+        assertThat(ParameterValues.durationOrZeroMillis("mappingConfidenceBudget", "0", 1000)).isZero();
+        assertThat(ParameterValues.durationOrZeroMillis("mappingConfidenceBudget", "1s", 1000)).isEqualTo(1000);
+        assertThat(ParameterValues.durationOrZeroMillis("mappingConfidenceBudget", null, 1000)).isEqualTo(1000);
+        assertThatThrownBy(() -> ParameterValues.durationOrZeroMillis("mappingConfidenceBudget", "-1", 1000))
+                .hasMessageContaining("atomledger.mappingConfidenceBudget='-1'");
+        assertThat(ParameterValues.nonNegative("reviewMargin", "0", 0)).isZero();
+        assertThat(ParameterValues.nonNegative("reviewMargin", " 2 ", 0)).isEqualTo(2);
+        assertThatThrownBy(() -> ParameterValues.nonNegative("reviewMargin", "-2", 0))
+                .hasMessage("AtomLedger configuration: atomledger.reviewMargin='-2' is not valid: it cannot be negative;"
+                        + " use 0 or a positive whole number.");
+        assertThatThrownBy(() -> ParameterValues.nonNegative("reviewMargin", "two", 0))
+                .hasMessageContaining("atomledger.reviewMargin='two'");
+    }
 }
