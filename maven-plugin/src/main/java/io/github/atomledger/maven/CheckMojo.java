@@ -223,8 +223,8 @@ public final class CheckMojo extends AbstractMojo {
      * Maps whose margin to the runner-up (the cheapest map that sends some carbon elsewhere) is
      * at most this many weighted bond edits get a {@code mapping.review} finding, and a curated map
      * at most this much dearer than the optimum is accepted ({@code mapping.curated-undecided})
-     * instead of failing as {@code mapping.curated-differs}. Default 0: a narrow margin alone does
-     * not flag, as correct maps of central metabolism often win by 1 or 2 (BENCHMARKS.md);
+     * instead of failing as {@code mapping.curated-differs}. At 0 a narrow margin alone does not
+     * flag, as correct maps of central metabolism often win by 1 or 2 (BENCHMARKS.md);
      * rearrangement patterns and weight-dependent fates always do. Example:
      * {@code -Datomledger.reviewMargin=2}.
      */
