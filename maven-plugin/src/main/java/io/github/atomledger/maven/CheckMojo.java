@@ -9,12 +9,14 @@ import io.github.atomledger.checker.gate.Gate;
 import io.github.atomledger.checker.gate.GateConfig;
 import io.github.atomledger.checker.report.ConsoleSummary;
 import io.github.atomledger.checker.report.Reporters;
+import io.github.atomledger.checker.report.UnchangedRun;
 
 import java.io.File;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.apache.maven.execution.MavenSession;
 import org.apache.maven.plugin.AbstractMojo;
 import org.apache.maven.plugin.MojoExecutionException;
@@ -180,6 +182,17 @@ public final class CheckMojo extends AbstractMojo {
     private boolean exportMaps;
 
     /**
+     * When every input is byte for byte what an earlier run had (the model files, structure
+     * sources, curated maps, pathways, fates, baseline, every parameter, and AtomLedger's own
+     * code), that run's reports, console lines and verdict are put back instead of computed again
+     * (stored below {@code cacheDirectory}, in {@code runs/}). Never with {@code exportMaps}, a
+     * {@code previousModels} gate or {@code cacheDirectory=none}. {@code false} always runs
+     * everything. Example: {@code -Datomledger.reuseUnchanged=false}.
+     */
+    @Parameter(property = "atomledger.reuseUnchanged", defaultValue = "true")
+    private boolean reuseUnchanged;
+
+    /**
      * Atom mapping: {@code auto} (map when {@code structures} is set), {@code on} (also with
      * InChIs from MIRIAM annotations or structures stored by {@code annotate}), or {@code off}.
      */
@@ -288,11 +301,18 @@ public final class CheckMojo extends AbstractMojo {
                         ParameterValues.nonNegative("reviewMargin", reviewMargin, 0)))
                 .withTraces(ConfigMapper.traces(baseDirectory, pathways, fates, tracers));
         GateConfig gate = ConfigMapper.toGate(baseDirectory, baseline, previousModels, failOn);
+        boolean colour = ConsoleSummary.colourWanted(System.getenv(), System.console() != null);
+        MavenRunListener log = new MavenRunListener(getLog());
+        Optional<UnchangedRun> reuse = reuseUnchanged && !exportMaps
+                ? UnchangedRun.of(config, gate, "check;colour=" + colour) : Optional.empty();
+        if (reuse.isPresent() && replay(reuse.get(), log)) {
+            return;
+        }
         RunResult result;
         Reporters.Outcome reports;
+        RecordingRunListener listener = new RecordingRunListener(log);
         try {
             Engine engine = new Engine();
-            MavenRunListener listener = new MavenRunListener(getLog());
             result = Gate.standard(engine, config.maxModelBytes()).apply(engine.run(config, listener), gate, listener);
             reports = Reporters.forFormats(config.formats()).writeAll(result, config.reportDirectory());
         } catch (AtomLedgerException e) {
@@ -301,18 +321,15 @@ public final class CheckMojo extends AbstractMojo {
             throw ConfigMapper.failure("AtomLedger configuration: " + e.getMessage(), e);
         }
         List<Path> written = reports.written();
-        boolean colour = ConsoleSummary.colourWanted(System.getenv(), System.console() != null);
-        MavenRunListener log = new MavenRunListener(getLog());
-        for (ConsoleSummary.Line line : ConsoleSummary.report(result, colour)) {
-            switch (line.level()) {
-                case ERROR -> log.error(line.text());
-                case WARNING -> log.warn(line.text());
-                default -> log.info(line.text());
-            }
-        }
+        // What a reused run shows again: the warnings the run logged, then the summary and the reports.
+        List<ConsoleSummary.Line> shown = listener.kept();
+        int live = shown.size();
+        shown.addAll(ConsoleSummary.report(result, colour));
         for (Path p : written) {
-            getLog().info("report: " + ConfigMapper.display(config.baseDirectory(), p));
+            shown.add(new ConsoleSummary.Line(ConsoleSummary.Level.INFO,
+                    "report: " + ConfigMapper.display(config.baseDirectory(), p)));
         }
+        print(shown.subList(live, shown.size()), log);
         // Maps are exported after the reports; a file system error there fails the goal like a
         // report that could not be written.
         List<String> exported;
@@ -342,8 +359,48 @@ public final class CheckMojo extends AbstractMojo {
         if (exportError != null) {
             throw new MojoExecutionException(exportError);
         }
-        if (!result.failing().isEmpty()) {
-            throw new MojoFailureException(ConfigMapper.failureSummary(result, written, config.baseDirectory()));
+        String failure = result.failing().isEmpty() ? null
+                : ConfigMapper.failureSummary(result, written, config.baseDirectory());
+        if (reuse.isPresent()) {
+            try {
+                reuse.get().store(new UnchangedRun.Outcome(shown, failure), written);
+            } catch (IOException | RuntimeException e) {
+                getLog().debug("AtomLedger: this run is not kept for reuse: " + e);
+            }
+        }
+        if (failure != null) {
+            throw new MojoFailureException(failure);
+        }
+    }
+
+    /** Shows an unchanged earlier run again; false when there is none to show (then nothing was changed). */
+    private boolean replay(UnchangedRun reuse, MavenRunListener log) throws MojoFailureException {
+        Optional<UnchangedRun.Outcome> again;
+        try {
+            again = reuse.restore();
+        } catch (IOException | RuntimeException e) {
+            getLog().debug("AtomLedger: the earlier run cannot be reused: " + e);
+            return false;
+        }
+        if (again.isEmpty()) {
+            return false;
+        }
+        getLog().info("AtomLedger: no input changed since an earlier run; its reports and findings are shown"
+                + " again (atomledger.reuseUnchanged=false runs everything)");
+        print(again.get().lines(), log);
+        if (again.get().failure() != null) {
+            throw new MojoFailureException(again.get().failure());
+        }
+        return true;
+    }
+
+    private static void print(List<ConsoleSummary.Line> lines, MavenRunListener log) {
+        for (ConsoleSummary.Line line : lines) {
+            switch (line.level()) {
+                case ERROR -> log.error(line.text());
+                case WARNING -> log.warn(line.text());
+                default -> log.info(line.text());
+            }
         }
     }
 }

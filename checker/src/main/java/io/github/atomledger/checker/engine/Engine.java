@@ -54,6 +54,15 @@ public final class Engine {
         return checks;
     }
 
+    /**
+     * The model files a configuration names, in the order a run reads them.
+     *
+     * @throws AtomLedgerException when a pattern matches no file (as {@link #run} would)
+     */
+    public static List<Path> modelFiles(RunConfig config) {
+        return ModelLocator.locate(config.baseDirectory(), config.models());
+    }
+
     public RunResult run(RunConfig config, RunListener listener) {
         List<Path> files = ModelLocator.locate(config.baseDirectory(), config.models());
         ModelLoader loader = new ModelLoader(new LoadOptions(config.maxModelBytes()));

@@ -38,7 +38,9 @@ public record RunConfig(Path baseDirectory, List<String> models, Path reportDire
         if (models.isEmpty() || models.stream().allMatch(String::isBlank)) {
             throw new IllegalArgumentException("models: at least one model file or pattern is needed");
         }
-        formats = Set.copyOf(formats);
+        // in the enum's order, whatever order they came in (Set.copyOf's order changes per JVM)
+        formats = formats.isEmpty() ? Set.of()
+                : java.util.Collections.unmodifiableSet(java.util.EnumSet.copyOf(formats));
         Objects.requireNonNull(policy, "policy");
         Objects.requireNonNull(mapping, "mapping");
         traces = traces == null ? TraceConfig.NONE : traces;

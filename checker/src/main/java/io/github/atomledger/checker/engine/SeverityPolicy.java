@@ -243,4 +243,10 @@ public final class SeverityPolicy {
     public Map<ReactionClass, String> classOverrides() {
         return byClass;
     }
+
+    /** Every override, in a stable order (part of the key of a reused run, {@code UnchangedRun}). */
+    @Override
+    public String toString() {
+        return "SeverityPolicy[byRule=" + new java.util.TreeMap<>(byRule) + ", byClass=" + new java.util.TreeMap<>(byClass) + "]";
+    }
 }
