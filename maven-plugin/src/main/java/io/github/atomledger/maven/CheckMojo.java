@@ -304,7 +304,7 @@ public final class CheckMojo extends AbstractMojo {
         boolean colour = ConsoleSummary.colourWanted(System.getenv(), System.console() != null);
         MavenRunListener log = new MavenRunListener(getLog());
         Optional<UnchangedRun> reuse = reuseUnchanged && !exportMaps
-                ? UnchangedRun.of(config, gate, "check;colour=" + colour) : Optional.empty();
+                ? UnchangedRun.of(config, gate, "check;colour=" + colour, CheckMojo.class) : Optional.empty();
         if (reuse.isPresent() && replay(reuse.get(), log)) {
             return;
         }

@@ -80,8 +80,9 @@ public final class UnchangedRun {
      * The reuse handle of this run, or empty when this run cannot be reused (see the class comment).
      *
      * @param variant anything else the caller's output depends on (for example "colour")
+     * @param code    classes of the caller whose code shapes the output (their jars join the key)
      */
-    public static Optional<UnchangedRun> of(RunConfig config, GateConfig gate, String variant) {
+    public static Optional<UnchangedRun> of(RunConfig config, GateConfig gate, String variant, Class<?>... code) {
         Path cache = config.mapping().cacheDirectory();
         if (cache == null || (gate != null && gate.previousModels() != null)) {
             return Optional.empty();
@@ -92,6 +93,9 @@ public final class UnchangedRun {
             text(d, Version.get());
             text(d, codeHash(UnchangedRun.class));
             text(d, codeHash(io.github.atomledger.atommapper.mapping.AtomMapper.class));
+            for (Class<?> c : code) {
+                text(d, codeHash(c));
+            }
             text(d, variant);
             text(d, config.toString());
             text(d, String.valueOf(gate));
