@@ -8,7 +8,6 @@ import io.github.atomledger.checker.trace.LabelReach;
 import io.github.atomledger.checker.trace.Step;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -33,10 +32,8 @@ final class ReachReporter implements Reporter {
     /** Writes the file; returns null (and removes an old file) when there is nothing to write. */
     @Override
     public Path write(RunResult result, Path directory) throws IOException {
-        Path file = directory.resolve(FILE);
         if (result.models().stream().allMatch(m -> m.traces().reach().isEmpty())) {
-            Files.deleteIfExists(file);
-            return null;
+            return ReportFiles.writeJsonOrRemove(directory.resolve(FILE), null);
         }
         List<Object> sources = new ArrayList<>();
         for (ModelResult m : result.models()) {
@@ -63,7 +60,6 @@ final class ReachReporter implements Reporter {
         }
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("sources", sources);
-        ReportFiles.write(file, JsonText.of(root));
-        return file;
+        return ReportFiles.writeJsonOrRemove(directory.resolve(FILE), root);
     }
 }

@@ -31,13 +31,44 @@ final class ReportFiles {
         try {
             Files.write(tmp, content);
             readableByAll(tmp);
-            try {
-                Files.move(tmp, file, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING);
-            }
+            replace(tmp, file);
         } finally {
             Files.deleteIfExists(tmp);
+        }
+    }
+
+    /**
+     * The JSON text of {@code tree} as {@code file}; when {@code tree} is null, removes an earlier
+     * run's file instead (so the folder never shows stale output) and returns null.
+     */
+    static Path writeJsonOrRemove(Path file, Object tree) throws IOException {
+        if (tree == null) {
+            Files.deleteIfExists(file);
+            return null;
+        }
+        write(file, JsonText.of(tree));
+        return file;
+    }
+
+    /** A copy of {@code source} as {@code target}, whole: copied beside the target, then moved. */
+    static void copy(Path source, Path target) throws IOException {
+        Path dir = target.toAbsolutePath().getParent();
+        Files.createDirectories(dir);
+        Path tmp = Files.createTempFile(dir, "." + target.getFileName(), ".tmp");
+        try {
+            Files.copy(source, tmp, StandardCopyOption.REPLACE_EXISTING);
+            replace(tmp, target);
+        } finally {
+            Files.deleteIfExists(tmp);
+        }
+    }
+
+    /** Moves a finished temporary file over {@code target}: atomically where the file system can. */
+    static void replace(Path tmp, Path target) throws IOException {
+        try {
+            Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
         }
     }
 }

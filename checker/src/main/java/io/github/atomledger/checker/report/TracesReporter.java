@@ -13,7 +13,6 @@ import io.github.atomledger.checker.trace.Position;
 import io.github.atomledger.checker.trace.StepUse;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -43,13 +42,8 @@ final class TracesReporter implements Reporter {
     /** Writes the file; returns null (and removes an old file) when nothing was traced. */
     @Override
     public Path write(RunResult result, Path directory) throws IOException {
-        Path file = directory.resolve(FILE);
-        if (result.models().stream().allMatch(m -> m.traces().pathways().isEmpty())) {
-            Files.deleteIfExists(file);
-            return null;
-        }
-        ReportFiles.write(file, JsonText.of(tree(result)));
-        return file;
+        boolean none = result.models().stream().allMatch(m -> m.traces().pathways().isEmpty());
+        return ReportFiles.writeJsonOrRemove(directory.resolve(FILE), none ? null : tree(result));
     }
 
     static Map<String, Object> tree(RunResult result) {

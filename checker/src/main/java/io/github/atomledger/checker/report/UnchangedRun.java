@@ -10,7 +10,6 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -103,10 +102,9 @@ public final class UnchangedRun {
             for (Path model : Engine.modelFiles(config)) {
                 file(d, base, model);
             }
-            for (Path source : config.mapping().structureSources()) {
+            for (Path source : config.mapping().structureSources()) { // the structure table is the first
                 file(d, base, source);
             }
-            file(d, base, config.mapping().structures());
             file(d, base, config.mapping().curatedMaps());
             file(d, base, config.traces().pathways());
             file(d, base, config.traces().fates());
@@ -192,26 +190,12 @@ public final class UnchangedRun {
             String hash = hash(f);
             Path blob = blob(hash);
             if (!Files.isRegularFile(blob)) {
-                Files.createDirectories(blob.getParent());
-                Path tmp = Files.createTempFile(blob.getParent(), ".blob", ".tmp");
-                try {
-                    Files.copy(f, tmp, StandardCopyOption.REPLACE_EXISTING);
-                    move(tmp, blob);
-                } finally {
-                    Files.deleteIfExists(tmp);
-                }
+                ReportFiles.copy(f, blob);
             }
             String rel = reportDirectory.relativize(f).toString().replace('\\', '/');
             sb.append("file\t").append(escape(rel)).append('\t').append(hash).append('\n');
         }
-        Files.createDirectories(record.getParent());
-        Path tmp = Files.createTempFile(record.getParent(), ".run", ".tmp");
-        try {
-            Files.writeString(tmp, sb, StandardCharsets.UTF_8);
-            move(tmp, record);
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        ReportFiles.write(record, sb.toString());
     }
 
     private Path blob(String hash) {
@@ -229,17 +213,9 @@ public final class UnchangedRun {
             Files.copy(blob, tmp, StandardCopyOption.REPLACE_EXISTING);
         }
         try {
-            move(tmp, target);
+            ReportFiles.replace(tmp, target);
         } finally {
             Files.deleteIfExists(tmp);
-        }
-    }
-
-    private static void move(Path from, Path to) throws IOException {
-        try {
-            Files.move(from, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-        } catch (AtomicMoveNotSupportedException e) {
-            Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
         }
     }
 
